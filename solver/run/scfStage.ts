@@ -1,0 +1,176 @@
+import type { RunFile } from '../runFile/schema';
+import type { ProgressSink } from '../types';
+import { overlapMatrix, kineticMatrix, nuclearAttractionMatrix, electronRepulsionIntegrals, dipoleMatrices } from '../integrals';
+import { runScf, stabilityAnalysis, followInstability, type ScfProblem, type ScfResult } from '../scf';
+import { mullikenCharges, dipoleMomentDebye } from '../properties';
+import { centreOfMassBohr } from '../system/molecule';
+import { orbitalIrreps, irrepLabel } from '../symmetry';
+import type { PreparedMolecule, PreparedModel } from './prepareSystem';
+import type { ScfSummary } from './result';
+
+/** What later stages need from the SCF, in the orbital basis it produced. */
+export interface ReferenceOrbitals {
+  problem: ScfProblem;
+  scf: ScfResult;
+  /** MO coefficients used for CI (α orbitals; the same as β for RHF and ROHF). */
+  coefficients: Float64Array;
+  orbitalEnergies: Float64Array;
+  /** Irrep index per MO (XOR-multiplying), when the molecule's symmetry is used. */
+  irreps: Int32Array | null;
+  summary: ScfSummary;
+}
+
+export interface ScfStageOptions {
+  onProgress?: ProgressSink;
+}
+
+function scfOptionsFor(runFile: RunFile, reference: 'RHF' | 'UHF' | 'ROHF', onProgress?: ProgressSink) {
+  const s = runFile.scf;
+  return {
+    reference,
+    guess: s?.guess ?? 'huckel',
+    maxIterations: s?.maxIterations ?? 200,
+    energyTolerance: s?.energyTolerance ?? 1e-10,
+    commutatorTolerance: s?.commutatorTolerance ?? 1e-8,
+    diis: s?.diis ?? true,
+    breakSymmetry: s?.breakSymmetry ?? false,
+    onProgress: onProgress
+      ? (ev: { iteration: number; energyHartree: number; error: number }) =>
+          onProgress({ phase: 'scf', iteration: ev.iteration, energyHartree: ev.energyHartree, error: ev.error })
+      : undefined,
+  } as const;
+}
+
+function defaultReference(twoS: number): 'RHF' | 'ROHF' {
+  return twoS === 0 ? 'RHF' : 'ROHF';
+}
+
+function solveReference(problem: ScfProblem, runFile: RunFile, reference: 'RHF' | 'UHF' | 'ROHF', onProgress?: ProgressSink) {
+  let scf = runScf(problem, scfOptionsFor(runFile, reference, onProgress));
+  let stability: ScfSummary['stability'] = null;
+  if (runFile.scf?.stability ?? true) {
+    let analysis = stabilityAnalysis(problem, scf);
+    if (!analysis.stable && runFile.scf?.followInstability) {
+      scf = followInstability(problem, scf, scfOptionsFor(runFile, reference, onProgress));
+      analysis = stabilityAnalysis(problem, scf);
+    }
+    stability = {
+      rhfToRhf: analysis.rhfToRhf?.lowestEigenvalue,
+      rhfToUhf: analysis.rhfToUhf?.lowestEigenvalue,
+      uhfToUhf: analysis.uhfToUhf?.lowestEigenvalue,
+      stable: analysis.stable,
+    };
+  }
+  return { scf, stability };
+}
+
+function summarise(scf: ScfResult, stability: ScfSummary['stability'], extra: Partial<ScfSummary>): ScfSummary {
+  return {
+    reference: scf.reference,
+    converged: scf.converged,
+    energy: scf.energyHartree,
+    iterations: scf.iterations.map((it) => ({
+      iteration: it.iteration,
+      energy: it.energyHartree,
+      deltaEnergy: it.deltaEnergy,
+      commutatorNorm: it.commutatorNorm,
+    })),
+    orbitalEnergies: { alpha: Array.from(scf.orbitalEnergies.alpha), beta: Array.from(scf.orbitalEnergies.beta) },
+    occupations: { alpha: Array.from(scf.occupations.alpha), beta: Array.from(scf.occupations.beta) },
+    orbitalIrreps: null,
+    s2: scf.s2,
+    mullikenCharges: null,
+    dipole: null,
+    stability,
+    ...extra,
+  };
+}
+
+export function moleculeScf(prepared: PreparedMolecule, runFile: RunFile, { onProgress }: ScfStageOptions): ReferenceOrbitals {
+  const { basis, molecule } = prepared;
+  const n = basis.nFunctions;
+  const overlap = overlapMatrix(basis);
+  const kinetic = kineticMatrix(basis);
+  const attraction = nuclearAttractionMatrix(basis, molecule);
+  const coreHamiltonian = new Float64Array(n * n);
+  for (let i = 0; i < n * n; i++) coreHamiltonian[i] = kinetic[i] + attraction[i];
+  const eri = electronRepulsionIntegrals(basis, {
+    onProgress: onProgress ? (done: number, total: number) => onProgress({ phase: 'integrals', done, total }) : undefined,
+  });
+  const nAlpha = (prepared.nElectrons + prepared.twoS) / 2;
+  const nBeta = (prepared.nElectrons - prepared.twoS) / 2;
+  const problem: ScfProblem = {
+    nBasis: n,
+    overlap,
+    coreHamiltonian,
+    eri,
+    nuclearRepulsionHartree: prepared.nuclearRepulsionHartree,
+    nAlpha,
+    nBeta,
+  };
+  const reference = runFile.reference ?? defaultReference(prepared.twoS);
+  const { scf, stability } = solveReference(problem, runFile, reference, onProgress);
+
+  let irreps: Int32Array | null = null;
+  let coefficients = scf.coefficients.alpha;
+  let orbitalIrrepLabels: string[] | null = null;
+  if (prepared.symmetry && reference !== 'UHF') {
+    const labelled = orbitalIrreps(basis, prepared.symmetry, coefficients, overlap, n, scf.orbitalEnergies.alpha);
+    irreps = labelled.irreps;
+    orbitalIrrepLabels = labelled.labels;
+    coefficients = labelled.coefficients ?? coefficients;
+  } else if (prepared.symmetry) {
+    // UHF orbitals of a symmetry-broken solution need not carry irreps; label only when pure.
+    orbitalIrrepLabels = null;
+  }
+
+  const densityTotal = new Float64Array(n * n);
+  for (let i = 0; i < n * n; i++) densityTotal[i] = scf.density.alpha[i] + scf.density.beta[i];
+  const origin = centreOfMassBohr(molecule);
+  const dipole = dipoleMomentDebye(densityTotal, dipoleMatrices(basis, origin), molecule, origin);
+  const charges = mullikenCharges(densityTotal, overlap, basis.functionAtom, molecule);
+
+  return {
+    problem,
+    scf,
+    coefficients,
+    orbitalEnergies: scf.orbitalEnergies.alpha,
+    irreps,
+    summary: summarise(scf, stability, {
+      orbitalIrreps: orbitalIrrepLabels,
+      mullikenCharges: Array.from(charges),
+      dipole: { vectorAu: Array.from(dipole.vectorAu), magnitudeDebye: dipole.magnitudeDebye },
+    }),
+  };
+}
+
+/**
+ * A model Hamiltonian with a requested reference: SCF in its own orthonormal orbitals
+ * (overlap = identity), then the CI uses the SCF orbitals like any molecule would.
+ */
+export function modelScf(prepared: PreparedModel, runFile: RunFile, { onProgress }: ScfStageOptions): ReferenceOrbitals {
+  const { hamiltonian } = prepared;
+  const n = hamiltonian.nOrbitals;
+  const overlap = new Float64Array(n * n);
+  for (let i = 0; i < n; i++) overlap[i * n + i] = 1;
+  const problem: ScfProblem = {
+    nBasis: n,
+    overlap,
+    coreHamiltonian: hamiltonian.h,
+    eri: hamiltonian.eri,
+    nuclearRepulsionHartree: hamiltonian.coreEnergy,
+    nAlpha: (prepared.nElectrons + prepared.twoS) / 2,
+    nBeta: (prepared.nElectrons - prepared.twoS) / 2,
+  };
+  const { scf, stability } = solveReference(problem, runFile, runFile.reference!, onProgress);
+  return {
+    problem,
+    scf,
+    coefficients: scf.coefficients.alpha,
+    orbitalEnergies: scf.orbitalEnergies.alpha,
+    irreps: null,
+    summary: summarise(scf, stability, {}),
+  };
+}
+
+export { irrepLabel };
