@@ -13,13 +13,12 @@
  * A beta excitation operator is a pair of beta operators, which passes the alpha string
  * with sign (+1), so the phase of each term is the product of the two strings' phases.
  *
- * The alpha–beta loop groups alpha replacements by orbital pair pq; for one pq it
- * precomputes W_k = sign_k·(pq|rs_k) over the beta replacement list, so the inner loop
- * is a gather-and-sum over beta strings.
+ * The beta–beta part works on a beta-major copy of the vector and the alpha–beta part on
+ * gathered rows (see below), so every inner loop runs over contiguous memory.
  */
 import { badInput } from '../errors';
 import type { OrbitalHamiltonian } from '../types';
-import { sigmaPlan } from './sigmaPlan';
+import { sigmaPlan, SigmaPlan } from './sigmaPlan';
 import { blockIndexOf, CiSpace } from './space';
 
 function checkLengths(space: CiSpace, ...vectors: Float64Array[]): void {
@@ -32,24 +31,32 @@ export function sigma(ham: OrbitalHamiltonian, space: CiSpace, c: Float64Array, 
   checkLengths(space, c, out);
   if (c === out) throw badInput('sigma needs distinct input and output vectors');
   const plan = sigmaPlan(ham, space);
-  const { n, eri4 } = plan;
-  const n2 = n * n;
+  sigmaDiagonalPart(ham.coreEnergy, plan, space, c, out);
+  sigmaAlphaAlpha(plan, space, c, out);
+  sigmaBetaBeta(plan, space, c, out);
+  sigmaAlphaBeta(plan, space, c, out);
+}
+
+/** Core energy plus each string's same-spin diagonal energy. */
+function sigmaDiagonalPart(coreEnergy: number, plan: SigmaPlan, space: CiSpace, c: Float64Array, out: Float64Array): void {
   const alphaClasses = space.alpha.classes;
   const betaClasses = space.beta.classes;
-
-  // diagonal same-spin energies and the core energy
   for (const block of space.blocks) {
     const aStart = alphaClasses[block.alphaClass].start;
     const bStart = betaClasses[block.betaClass].start;
     const nB = block.betaCount;
     for (let ia = 0; ia < block.alphaCount; ia++) {
-      const ea = ham.coreEnergy + plan.alpha.diagonal[aStart + ia];
+      const ea = coreEnergy + plan.alpha.diagonal[aStart + ia];
       const row = block.offset + ia * nB;
       for (let ib = 0; ib < nB; ib++) out[row + ib] = (ea + plan.beta.diagonal[bStart + ib]) * c[row + ib];
     }
   }
+}
 
-  // alpha–alpha: whole beta rows move together
+/** Alpha–alpha couplings: whole beta rows move together. */
+function sigmaAlphaAlpha(plan: SigmaPlan, space: CiSpace, c: Float64Array, out: Float64Array): void {
+  const alphaClasses = space.alpha.classes;
+  const betaClasses = space.beta.classes;
   plan.alpha.replacements.sameSpin.forEach((list, li) => {
     const values = plan.alpha.sameSpinValues[li];
     for (let bc = 0; bc < betaClasses.length; bc++) {
@@ -65,19 +72,25 @@ export function sigma(ham: OrbitalHamiltonian, space: CiSpace, c: Float64Array, 
         for (let e = list.start[ia]; e < list.start[ia + 1]; e++) {
           const v = values[e];
           const cRow = offJ + list.source[e] * nB;
-          for (let ib = 0; ib < nB; ib++) out[outRow + ib] += v * c[cRow + ib];
+          axpy(out, outRow, v, c, cRow, nB);
         }
       }
     }
   });
+}
 
-  // beta–beta: gather within each alpha row
+/** Beta–beta couplings, on a beta-major (transposed) copy so that whole alpha columns move together. */
+function sigmaBetaBeta(plan: SigmaPlan, space: CiSpace, c: Float64Array, out: Float64Array): void {
+  if (plan.beta.replacements.sameSpin.length === 0) return;
+  const alphaClasses = space.alpha.classes;
+  const betaClasses = space.beta.classes;
+  const cT = scratchVector(plan, 'transposedInput', space.determinantCount);
+  const outT = scratchVector(plan, 'transposedOutput', space.determinantCount);
+  transposeBlocks(space, c, cT, false);
+  outT.fill(0);
   plan.beta.replacements.sameSpin.forEach((list, li) => {
     const values = plan.beta.sameSpinValues[li];
-    const nBI = betaClasses[list.targetClass].count;
-    const nBJ = betaClasses[list.sourceClass].count;
-    const start = list.start;
-    const source = list.source;
+    const nTarget = betaClasses[list.targetClass].count;
     for (let ac = 0; ac < alphaClasses.length; ac++) {
       const bI = blockIndexOf(space, ac, list.targetClass);
       const bJ = blockIndexOf(space, ac, list.sourceClass);
@@ -85,20 +98,28 @@ export function sigma(ham: OrbitalHamiltonian, space: CiSpace, c: Float64Array, 
       const offI = space.blocks[bI].offset;
       const offJ = space.blocks[bJ].offset;
       const nA = alphaClasses[ac].count;
-      for (let ia = 0; ia < nA; ia++) {
-        const outRow = offI + ia * nBI;
-        const cRow = offJ + ia * nBJ;
-        for (let ib = 0; ib < nBI; ib++) {
-          let s = 0;
-          for (let e = start[ib]; e < start[ib + 1]; e++) s += values[e] * c[cRow + source[e]];
-          out[outRow + ib] += s;
+      for (let ib = 0; ib < nTarget; ib++) {
+        const outCol = offI + ib * nA;
+        for (let e = list.start[ib]; e < list.start[ib + 1]; e++) {
+          const v = values[e];
+          const cCol = offJ + list.source[e] * nA;
+          axpy(outT, outCol, v, cT, cCol, nA);
         }
       }
     }
   });
+  transposeBlocks(space, outT, out, true);
+}
 
-  // alpha–beta: (single alpha replacement) × (single beta replacement)
-  let scratch = new Float64Array(0);
+/**
+ * Alpha–beta couplings. For one alpha orbital pair pq the alpha replacements J→I form the
+ * rows of a dense gathered matrix; the beta operator M_pq = Σ_rs (pq|rs) E^β_rs acts on it
+ * as a sparse matrix, with the contiguous inner loop running over the gathered rows.
+ */
+function sigmaAlphaBeta(plan: SigmaPlan, space: CiSpace, c: Float64Array, out: Float64Array): void {
+  const { n, eri4 } = plan;
+  const n2 = n * n;
+  const betaClasses = space.beta.classes;
   for (const A of plan.alpha.replacements.singles) {
     for (const B of plan.beta.replacements.singles) {
       const bI = blockIndexOf(space, A.targetClass, B.targetClass);
@@ -108,30 +129,76 @@ export function sigma(ham: OrbitalHamiltonian, space: CiSpace, c: Float64Array, 
       const offJ = space.blocks[bJ].offset;
       const nBI = betaClasses[B.targetClass].count;
       const nBJ = betaClasses[B.sourceClass].count;
-      const m = B.source.length;
-      if (scratch.length < m) scratch = new Float64Array(m);
-      const W = scratch;
       const bStart = B.start;
       const bSource = B.source;
       const bPair = B.pair;
       const bSign = B.sign;
       for (let pq = 0; pq < n2; pq++) {
         const eStart = A.pairStart[pq];
-        const eEnd = A.pairStart[pq + 1];
-        if (eStart === eEnd) continue;
+        const nE = A.pairStart[pq + 1] - eStart;
+        if (nE === 0) continue;
         const base = pq * n2;
-        for (let k = 0; k < m; k++) W[k] = bSign[k] * eri4[base + bPair[k]];
-        for (let e = eStart; e < eEnd; e++) {
-          const sa = A.pairSign[e];
-          const cRow = offJ + A.pairSource[e] * nBJ;
-          const outRow = offI + A.pairTarget[e] * nBI;
-          for (let ib = 0; ib < nBI; ib++) {
-            let s = 0;
-            for (let k = bStart[ib]; k < bStart[ib + 1]; k++) s += W[k] * c[cRow + bSource[k]];
-            out[outRow + ib] += sa * s;
+        const gathered = scratchVector(plan, 'gathered', nE * nBJ);
+        const result = scratchVector(plan, 'result', nE * nBI);
+        for (let e = 0; e < nE; e++) {
+          const sa = A.pairSign[eStart + e];
+          const cRow = offJ + A.pairSource[eStart + e] * nBJ;
+          for (let jb = 0; jb < nBJ; jb++) gathered[jb * nE + e] = sa * c[cRow + jb];
+        }
+        result.fill(0, 0, nE * nBI);
+        for (let ib = 0; ib < nBI; ib++) {
+          const rCol = ib * nE;
+          for (let k = bStart[ib]; k < bStart[ib + 1]; k++) {
+            const w = bSign[k] * eri4[base + bPair[k]];
+            if (w === 0) continue;
+            const gCol = bSource[k] * nE;
+            axpy(result, rCol, w, gathered, gCol, nE);
           }
         }
+        for (let e = 0; e < nE; e++) {
+          const outRow = offI + A.pairTarget[eStart + e] * nBI;
+          for (let ib = 0; ib < nBI; ib++) out[outRow + ib] += result[ib * nE + e];
+        }
       }
+    }
+  }
+}
+
+/** y[yo … yo+len) += a·x[xo … xo+len), unrolled by four (measurably faster in V8). */
+function axpy(y: Float64Array, yo: number, a: number, x: Float64Array, xo: number, len: number): void {
+  let k = 0;
+  for (; k + 3 < len; k += 4) {
+    y[yo + k] += a * x[xo + k];
+    y[yo + k + 1] += a * x[xo + k + 1];
+    y[yo + k + 2] += a * x[xo + k + 2];
+    y[yo + k + 3] += a * x[xo + k + 3];
+  }
+  for (; k < len; k++) y[yo + k] += a * x[xo + k];
+}
+
+/** A reusable work array of at least `length` entries kept on the plan. */
+function scratchVector(plan: SigmaPlan, name: string, length: number): Float64Array {
+  let v = plan.scratch.get(name);
+  if (!v || v.length < length) {
+    v = new Float64Array(length);
+    plan.scratch.set(name, v);
+  }
+  return v;
+}
+
+/**
+ * Block-wise transpose between the alpha-major layout (offset + ia·nβ + ib) and the
+ * beta-major one (offset + ib·nα + ia); going back it adds into the destination.
+ */
+function transposeBlocks(space: CiSpace, from: Float64Array, to: Float64Array, backToAlphaMajor: boolean): void {
+  for (const block of space.blocks) {
+    const nA = block.alphaCount;
+    const nB = block.betaCount;
+    const off = block.offset;
+    if (!backToAlphaMajor) {
+      for (let ia = 0; ia < nA; ia++) for (let ib = 0; ib < nB; ib++) to[off + ib * nA + ia] = from[off + ia * nB + ib];
+    } else {
+      for (let ib = 0; ib < nB; ib++) for (let ia = 0; ia < nA; ia++) to[off + ia * nB + ib] += from[off + ib * nA + ia];
     }
   }
 }

@@ -28,6 +28,8 @@ export interface SigmaPlan {
   eri4: Float64Array;
   alpha: SpinSigmaData;
   beta: SpinSigmaData;
+  /** Work arrays reused across sigma calls. */
+  scratch: Map<string, Float64Array>;
 }
 
 export function unpackEri(ham: OrbitalHamiltonian): Float64Array {
@@ -93,6 +95,7 @@ export function sigmaPlan(ham: OrbitalHamiltonian, space: CiSpace): SigmaPlan {
     eri4,
     alpha: spinData(ham, eri4, space.alpha, spinReplacements(space, 'alpha')),
     beta: spinData(ham, eri4, space.beta, spinReplacements(space, 'beta')),
+    scratch: new Map(),
   };
   space.cache.set(ham, plan);
   return plan;

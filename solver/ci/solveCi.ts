@@ -1,0 +1,207 @@
+/**
+ * Lowest CI roots of a Hamiltonian in a determinant space.
+ *
+ * Method: 'dense' diagonalises the full matrix from denseHamiltonian (ml-matrix, symmetric);
+ * 'davidson' runs the matrix-free Davidson solver (davidson.ts) on the sigma build;
+ * 'auto' (default) picks dense up to denseLimit (400) determinants.
+ *
+ * targetMultiplicity: roots of that spin only, judged by |⟨S²⟩ − S(S+1)| ≤ 1e-6 with
+ * S = (multiplicity − 1)/2. Dense: eigenvectors are scanned upwards until `roots` of them
+ * qualify. Davidson: it solves for more and more roots (adding the shortfall plus two each
+ * round) until `roots` of them qualify or the space is exhausted. Accidentally degenerate
+ * states of different spin can mix and then fail the test. The multiplicity must be
+ * reachable: multiplicity − 1 ≥ |nα − nβ|.
+ *
+ * Energies are totals (coreEnergy included). Each vector is normalised with its largest
+ * |c| made positive. referenceWeight is c0² of the aufbau determinant (0 if not in the space).
+ */
+import { EigenvalueDecomposition, Matrix } from 'ml-matrix';
+import { badInput, SolverError } from '../errors';
+import type { OrbitalHamiltonian } from '../types';
+import { davidson, DavidsonIteration } from './davidson';
+import { DENSE_LIMIT_DETERMINANTS, defaultMaxSubspace } from './davidsonSettings';
+import { denseHamiltonian } from './denseHamiltonian';
+import { spinSquared } from './densities';
+import { checkBudget, estimateCiSpace } from './estimate';
+import { hamiltonianDiagonal, sigma } from './sigma';
+import { buildCiSpace, CiSpace, determinantIndex, determinantStrings } from './space';
+import type { CiSpaceSpec } from './spaceSpec';
+
+export interface SolveCiOptions {
+  method?: 'auto' | 'dense' | 'davidson';
+  roots?: number;
+  targetMultiplicity?: number;
+  denseLimit?: number;
+  maxIterations?: number;
+  residualTolerance?: number;
+  energyTolerance?: number;
+  maxSubspace?: number;
+  budgetBytes?: number;
+  onProgress?: (event: { phase: 'davidson'; iteration: number; energies: number[]; residualNorms: number[] }) => void;
+  shouldCancel?: () => boolean;
+}
+
+export interface CiSolution {
+  determinantCount: number;
+  energies: number[];
+  vectors: Float64Array[];
+  s2: number[];
+  iterations: DavidsonIteration[];
+  method: 'dense' | 'davidson';
+  referenceWeight: number[];
+  space: CiSpace;
+}
+
+const SPIN_TOLERANCE = 1e-6;
+
+/** Normalise and make the largest-magnitude coefficient positive. */
+export function normaliseWithSignRule(v: Float64Array): Float64Array {
+  let norm = 0;
+  let largest = 0;
+  for (let i = 0; i < v.length; i++) {
+    norm += v[i] * v[i];
+    if (Math.abs(v[i]) > Math.abs(v[largest])) largest = i;
+  }
+  const scale = (v[largest] < 0 ? -1 : 1) / Math.sqrt(norm);
+  const out = new Float64Array(v.length);
+  for (let i = 0; i < v.length; i++) out[i] = v[i] * scale;
+  return out;
+}
+
+/**
+ * Start vectors: unit vectors on the lowest diagonal elements. With nα = nβ a determinant
+ * and its spin-flipped partner of equal diagonal enter as the pair (|D⟩ ± |D̄⟩)/√2, which
+ * separates singlet-like and triplet-like combinations from the start.
+ */
+function initialGuesses(space: CiSpace, diagonal: Float64Array, count: number): Float64Array[] {
+  const N = diagonal.length;
+  const order = Array.from({ length: N }, (_, i) => i).sort((a, b) => diagonal[a] - diagonal[b] || a - b);
+  const used = new Uint8Array(N);
+  const guesses: Float64Array[] = [];
+  const spinFlipPossible = space.nAlpha === space.nBeta;
+  for (const i of order) {
+    if (guesses.length >= count) break;
+    if (used[i]) continue;
+    used[i] = 1;
+    let partner = -1;
+    if (spinFlipPossible) {
+      const { alphaString, betaString } = determinantStrings(space, i);
+      const a = space.beta.lookup.get(space.alpha.patterns[alphaString]);
+      const b = space.alpha.lookup.get(space.beta.patterns[betaString]);
+      if (a !== undefined && b !== undefined && alphaString !== b) {
+        const j = determinantIndex(space, b, a);
+        if (j >= 0 && !used[j] && Math.abs(diagonal[j] - diagonal[i]) < 1e-10) partner = j;
+      }
+    }
+    if (partner < 0) {
+      const v = new Float64Array(N);
+      v[i] = 1;
+      guesses.push(v);
+    } else {
+      used[partner] = 1;
+      for (const sign of [1, -1]) {
+        const v = new Float64Array(N);
+        v[i] = Math.SQRT1_2;
+        v[partner] = sign * Math.SQRT1_2;
+        guesses.push(v);
+      }
+    }
+  }
+  return guesses;
+}
+
+function denseSolve(ham: OrbitalHamiltonian, space: CiSpace): { energies: number[]; vectors: Float64Array[] } {
+  const N = space.determinantCount;
+  const H = denseHamiltonian(ham, space);
+  const rows = Array.from({ length: N }, (_, i) => Array.from(H.subarray(i * N, (i + 1) * N)));
+  const eig = new EigenvalueDecomposition(new Matrix(rows), { assumeSymmetric: true });
+  const values = eig.realEigenvalues;
+  const order = values.map((_, i) => i).sort((a, b) => values[a] - values[b]);
+  const V = eig.eigenvectorMatrix;
+  return {
+    energies: order.map((i) => values[i]),
+    vectors: order.map((col) => Float64Array.from({ length: N }, (_, r) => V.get(r, col))),
+  };
+}
+
+export function solveCi(ham: OrbitalHamiltonian, spec: CiSpaceSpec, options: SolveCiOptions = {}): CiSolution {
+  if (spec.nOrbitals !== ham.nOrbitals) throw badInput(`the CI space has ${spec.nOrbitals} orbitals but the Hamiltonian ${ham.nOrbitals}`);
+  const roots = options.roots ?? 1;
+  if (!Number.isInteger(roots) || roots < 1) throw badInput(`roots must be a positive integer, got ${roots}`, 'roots');
+  const target = options.targetMultiplicity;
+  let targetS2: number | null = null;
+  if (target !== undefined) {
+    const twoS = target - 1;
+    if (!Number.isInteger(target) || twoS < Math.abs(spec.nAlpha - spec.nBeta) || (twoS - Math.abs(spec.nAlpha - spec.nBeta)) % 2 !== 0) {
+      throw badInput(`multiplicity ${target} cannot occur with ${spec.nAlpha} alpha and ${spec.nBeta} beta electrons`, 'targetMultiplicity');
+    }
+    targetS2 = (twoS / 2) * (twoS / 2 + 1);
+  }
+  checkBudget(estimateCiSpace(spec, { orbitalIrreps: ham.orbitalIrreps, roots }), options.budgetBytes);
+  const space = buildCiSpace(spec, ham.orbitalIrreps);
+  const N = space.determinantCount;
+  if (N === 0) throw badInput('the CI space is empty (no determinant satisfies the restrictions)');
+  if (roots > N) throw badInput(`asked for ${roots} roots but the space has only ${N} determinants`, 'roots');
+  const denseLimit = options.denseLimit ?? DENSE_LIMIT_DETERMINANTS;
+  const method = options.method === 'dense' || (options.method !== 'davidson' && N <= denseLimit) ? 'dense' : 'davidson';
+  const isTarget = (s2: number): boolean => targetS2 === null || Math.abs(s2 - targetS2) <= SPIN_TOLERANCE;
+
+  let energies: number[] = [];
+  let vectors: Float64Array[] = [];
+  let s2: number[] = [];
+  const iterations: DavidsonIteration[] = [];
+
+  if (method === 'dense') {
+    if (options.shouldCancel?.()) throw new SolverError('cancelled', 'the CI calculation was cancelled');
+    const all = denseSolve(ham, space);
+    for (let i = 0; i < N && energies.length < roots; i++) {
+      const v = normaliseWithSignRule(all.vectors[i]);
+      const spin = spinSquared(space, v);
+      if (!isTarget(spin)) continue;
+      energies.push(all.energies[i]);
+      vectors.push(v);
+      s2.push(spin);
+    }
+  } else {
+    const diagonal = hamiltonianDiagonal(ham, space);
+    let tracked = Math.min(N, roots);
+    let previousVectors: Float64Array[] = [];
+    for (;;) {
+      const guesses = [...previousVectors, ...initialGuesses(space, diagonal, tracked + 2)];
+      const result = davidson((x, out) => sigma(ham, space, x, out), diagonal, guesses, {
+        roots: tracked,
+        maxIterations: options.maxIterations ?? 200,
+        residualTolerance: options.residualTolerance ?? 1e-7,
+        energyTolerance: options.energyTolerance ?? 1e-12,
+        maxSubspace: Math.min(N, options.maxSubspace ?? defaultMaxSubspace(tracked)),
+        shouldCancel: options.shouldCancel,
+        onIteration: (record) => {
+          const entry = { iteration: iterations.length + 1, energies: record.energies, residualNorms: record.residualNorms };
+          iterations.push(entry);
+          options.onProgress?.({ phase: 'davidson', ...entry });
+        },
+      });
+      energies = [];
+      vectors = [];
+      s2 = [];
+      for (let r = 0; r < result.energies.length && energies.length < roots; r++) {
+        const v = normaliseWithSignRule(result.vectors[r]);
+        const spin = spinSquared(space, v);
+        if (!isTarget(spin)) continue;
+        energies.push(result.energies[r]);
+        vectors.push(v);
+        s2.push(spin);
+      }
+      if (energies.length >= roots || tracked >= N) break;
+      previousVectors = result.vectors;
+      tracked = Math.min(N, tracked + (roots - energies.length) + 2);
+    }
+  }
+  if (energies.length < roots) {
+    throw new SolverError('not-converged', `found only ${energies.length} of ${roots} roots with multiplicity ${target} in this space`, {
+      details: iterations,
+    });
+  }
+  const referenceWeight = vectors.map((v) => (space.referenceIndex >= 0 ? v[space.referenceIndex] ** 2 : 0));
+  return { determinantCount: N, energies, vectors, s2, iterations, method, referenceWeight, space };
+}
