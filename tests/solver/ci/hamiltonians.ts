@@ -1,6 +1,6 @@
 /**
  * Test Hamiltonians: seeded random ones with the 8-fold symmetry of real orbitals (the
- * packed storage enforces it) and an inline Hubbard model in the site basis.
+ * packed storage enforces it), optionally with orbital irreps and the integrals they forbid zeroed.
  */
 import { eriIndex, eriLength } from '../../../solver/integrals/eriIndex';
 import type { OrbitalHamiltonian } from '../../../solver/types';
@@ -42,18 +42,4 @@ export function randomHamiltonian(n: number, seed: number, irreps?: number[]): O
           for (let s = 0; s < n; s++) if ((irreps[p] ^ irreps[q] ^ irreps[r] ^ irreps[s]) !== 0) eri[eriIndex(p, q, r, s)] = 0;
   }
   return ham;
-}
-
-/** Hubbard model on `sites` sites, hopping −t between neighbours, on-site repulsion U. */
-export function hubbardInline(sites: number, periodic: boolean, t: number, U: number): OrbitalHamiltonian {
-  const h = new Float64Array(sites * sites);
-  const bonds = periodic && sites > 2 ? sites : sites - 1;
-  for (let i = 0; i < bonds; i++) {
-    const j = (i + 1) % sites;
-    h[i * sites + j] = -t;
-    h[j * sites + i] = -t;
-  }
-  const eri = new Float64Array(eriLength(sites));
-  for (let i = 0; i < sites; i++) eri[eriIndex(i, i, i, i)] = U;
-  return { nOrbitals: sites, coreEnergy: 0, h, eri };
 }
