@@ -115,18 +115,19 @@ export function runCiStage(input: CiStageInput): NonNullable<RunResult['ci']> & 
           input.onProgress!({ phase: 'davidson', iteration: ev.iteration, energies: ev.energies, residualNorms: ev.residualNorms })
       : undefined,
     shouldCancel: input.shouldCancel,
+    budgetBytes: input.budgetBytes,
   });
 
   input.onProgress?.({ phase: 'properties' });
   const warnings = [...selection.warnings];
-  const spinWarning = spinCompleteWarning(spec);
-  if (spinWarning) warnings.push(spinWarning);
+  const spinReport = spinCompleteWarning(spec);
+  if (spinReport.warning && spinReport.message) warnings.push(spinReport.message);
 
   const e0 = solution.energies[0];
   const roots: RootResult[] = solution.energies.map((energy, k) => {
     const vector = solution.vectors[k];
     const gamma = oneParticleDensity(solution.space, vector);
-    const natural = naturalOrbitals(gamma, spec.nOrbitals);
+    const natural = naturalOrbitals(gamma);
     const leading = leadingDeterminants(solution.space, vector, input.leadingCount);
     const s2 = solution.s2[k];
     const spin = (-1 + Math.sqrt(1 + 4 * Math.max(0, s2))) / 2;
