@@ -1,0 +1,2 @@
+import 'server-only';
+export { sendMail } from '@/db/mail';

@@ -1,0 +1,2 @@
+import 'server-only';
+export { hashPassword, verifyPassword } from '@/db/passwords';
