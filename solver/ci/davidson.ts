@@ -5,9 +5,9 @@
  * Each iteration: Rayleigh–Ritz in the subspace V (G = Vᵀ·A·V), residuals
  * r = A x − θ x for the tracked roots, corrections δ = r / (θ − D) with the diagonal
  * preconditioner D (denominators kept away from zero), two passes of Gram–Schmidt against
- * V, and new vectors appended. When the subspace would exceed maxSubspace it collapses to
- * the current Ritz vectors (whose A-images are formed from the stored ones, no extra
- * matrix products). A root is converged when its residual norm ≤ residualTolerance AND its
+ * V, and new vectors appended. When the subspace would exceed maxSubspace it collapses
+ * (thick restart) to its lowest max(2·roots, maxSubspace/2) Ritz vectors, whose A-images are
+ * formed from the stored ones, no extra matrix products. A root is converged when its residual norm ≤ residualTolerance AND its
  * energy changed by ≤ energyTolerance since the previous iteration.
  */
 import { EigenvalueDecomposition, Matrix } from 'ml-matrix';
@@ -170,14 +170,33 @@ export function davidson(
       corrections.push(residuals[r]); // fallback when the preconditioned vector lies in the span
     }
     if (m + corrections.length / 2 > maxSubspace) {
-      // collapse to the Ritz vectors, which are orthonormal; their images are already known
+      // thick restart: keep the lowest `keep` Ritz vectors (orthonormal, images known from
+      // the stored products), which retains more than the tracked roots' directions
+      const keep = Math.min(m, Math.max(2 * k, Math.floor(maxSubspace / 2)));
+      const keptX = ritzX.slice();
+      const keptAX = ritzAX.slice();
+      for (let r = k; r < keep; r++) {
+        const x = new Float64Array(N);
+        const ax = new Float64Array(N);
+        for (let i = 0; i < m; i++) {
+          const yi = y[r][i];
+          const vi = V[i];
+          const si = S[i];
+          for (let t = 0; t < N; t++) {
+            x[t] += yi * vi[t];
+            ax[t] += yi * si[t];
+          }
+        }
+        keptX.push(x);
+        keptAX.push(ax);
+      }
       V.length = 0;
       S.length = 0;
       G.length = 0;
-      for (let r = 0; r < k; r++) {
-        V.push(ritzX[r]);
-        S.push(ritzAX[r]);
-        G.push(Array.from({ length: r + 1 }, (_, i) => (i === r ? theta[r] : 0)));
+      for (let r = 0; r < keep; r++) {
+        V.push(keptX[r]);
+        S.push(keptAX[r]);
+        G.push(Array.from({ length: r + 1 }, (_, i) => (i === r ? values[r] : 0)));
         for (let i = 0; i < r; i++) G[i].push(0);
       }
     }
