@@ -26,7 +26,7 @@ function energyFromDensities(ham: OrbitalHamiltonian, gamma: Float64Array, gamma
 describe('density matrices and spin', () => {
   for (const name of ['FCI 6o 3α2β', 'CISD 7o 3α3β', 'RAS+CISD 7o 3α2β', 'irrep CISD 7o 3α2β']) {
     it(`rebuild the energy and have the right traces: ${name}`, () => {
-      // E = E_core + Σ h γ + ½ Σ (pq|rs) Γ (Helgaker, Jørgensen & Olsen (2000) §2.7); tr γ = N; Σ_pr Γ_pprr = N(N−1)
+      // E = E_core + Σ h γ + ½ Σ (pq|rs) Γ (Helgaker, Jørgensen & Olsen, Molecular Electronic-Structure Theory (2000), ch. 2); tr γ = N; Σ_pr Γ_pprr = N(N−1)
       const c = spaceCases.find((x) => x.name === name)!;
       const ham = randomHamiltonian(c.spec.nOrbitals, 55, c.irreps);
       const sol = solveCi(ham, c.spec, { roots: 2 });
