@@ -1,0 +1,69 @@
+/**
+ * All models, their associations, and `getModels()` for the app.
+ * `initModels(sequelize)` binds the classes to a connection; calling it again with the same
+ * connection does nothing, with another one re-binds them (scripts and tests use that).
+ */
+import type { Sequelize } from 'sequelize';
+import { getSequelize } from '../db/connection';
+import { AuditEntry, initAuditEntry } from './auditEntry';
+import { Invitation, initInvitation } from './invitation';
+import { MailMessage, initMailMessage } from './mailMessage';
+import { Membership, initMembership } from './membership';
+import { PasswordReset, initPasswordReset } from './passwordReset';
+import { Project, initProject } from './project';
+import { SignInAttempt, initSignInAttempt } from './signInAttempt';
+import { User, initUser } from './user';
+import { Workspace, initWorkspace } from './workspace';
+
+export { AuditEntry, Invitation, MailMessage, Membership, PasswordReset, Project, SignInAttempt, User, Workspace };
+export type { SiteRole } from './user';
+export type { WorkspaceRole } from './membership';
+
+const models = { AuditEntry, Invitation, MailMessage, Membership, PasswordReset, Project, SignInAttempt, User, Workspace };
+export type Models = typeof models;
+
+let boundTo: Sequelize | null = null;
+
+function associate(): void {
+  User.hasMany(Membership, { foreignKey: 'userId', as: 'memberships' });
+  Membership.belongsTo(User, { foreignKey: 'userId', as: 'user' });
+  Workspace.hasMany(Membership, { foreignKey: 'workspaceId', as: 'memberships' });
+  Membership.belongsTo(Workspace, { foreignKey: 'workspaceId', as: 'workspace' });
+  Workspace.belongsTo(User, { foreignKey: 'createdBy', as: 'creator' });
+
+  Workspace.hasMany(Project, { foreignKey: 'workspaceId', as: 'projects' });
+  Project.belongsTo(Workspace, { foreignKey: 'workspaceId', as: 'workspace' });
+  Project.belongsTo(User, { foreignKey: 'createdBy', as: 'creator' });
+
+  Workspace.hasMany(Invitation, { foreignKey: 'workspaceId', as: 'invitations' });
+  Invitation.belongsTo(Workspace, { foreignKey: 'workspaceId', as: 'workspace' });
+  Invitation.belongsTo(User, { foreignKey: 'invitedBy', as: 'inviter' });
+  Invitation.belongsTo(User, { foreignKey: 'acceptedBy', as: 'acceptor' });
+
+  User.hasMany(PasswordReset, { foreignKey: 'userId', as: 'passwordResets' });
+  PasswordReset.belongsTo(User, { foreignKey: 'userId', as: 'user' });
+
+  AuditEntry.belongsTo(User, { foreignKey: 'actorId', as: 'actor' });
+  AuditEntry.belongsTo(Workspace, { foreignKey: 'workspaceId', as: 'workspace' });
+}
+
+export function initModels(sequelize: Sequelize): Models {
+  if (boundTo === sequelize) return models;
+  initUser(sequelize);
+  initWorkspace(sequelize);
+  initMembership(sequelize);
+  initProject(sequelize);
+  initInvitation(sequelize);
+  initPasswordReset(sequelize);
+  initMailMessage(sequelize);
+  initAuditEntry(sequelize);
+  initSignInAttempt(sequelize);
+  associate();
+  boundTo = sequelize;
+  return models;
+}
+
+/** The models bound to the process's shared connection (initialised on first call). */
+export function getModels(): Models {
+  return initModels(getSequelize());
+}

@@ -1,0 +1,34 @@
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
+
+/** A single-use password-reset token (stored as its SHA-256 hex). */
+export class PasswordReset extends Model<InferAttributes<PasswordReset>, InferCreationAttributes<PasswordReset>> {
+  declare id: CreationOptional<number>;
+  declare userId: number;
+  declare tokenHash: string;
+  declare expiresAt: Date;
+  declare usedAt: CreationOptional<Date | null>;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+}
+
+export function initPasswordReset(sequelize: Sequelize): void {
+  PasswordReset.init(
+    {
+      id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
+      userId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
+      tokenHash: { type: DataTypes.CHAR(64), allowNull: false, unique: true },
+      expiresAt: { type: DataTypes.DATE(3), allowNull: false },
+      usedAt: { type: DataTypes.DATE(3), allowNull: true },
+      createdAt: DataTypes.DATE(3),
+      updatedAt: DataTypes.DATE(3),
+    },
+    { sequelize, modelName: 'PasswordReset', tableName: 'password_resets' },
+  );
+}
