@@ -256,14 +256,28 @@ export function symmetryFrame(molecule: Molecule, toleranceBohr = 1e-6): Molecul
   if (loosePermutations.some((p) => p === null)) {
     throw badInput(`the geometry is too close to the edge of the symmetry tolerance (${toleranceBohr} bohr) to settle its point group`);
   }
+  // Average each orbit's first atom over the group, zero the components its stabiliser
+  // reverses, then place the other atoms of the orbit as exact sign images of it.
   const symmetrised = new Float64Array(3 * n);
+  const placed = new Uint8Array(n);
   const order = table.operations.length;
   for (let a = 0; a < n; a++) {
-    for (let k = 0; k < 3; k++) {
-      let sum = 0;
-      table.operations.forEach((op, o) => (sum += op.signs[k] * framePositions[3 * loosePermutations[o]![a] + k]));
-      symmetrised[3 * a + k] = sum / order;
-    }
+    if (placed[a]) continue;
+    const mean = [0, 0, 0];
+    let reversedByStabiliser = 0;
+    table.operations.forEach((op, o) => {
+      const image = loosePermutations[o]![a];
+      for (let k = 0; k < 3; k++) mean[k] += op.signs[k] * framePositions[3 * image + k];
+      if (image === a) reversedByStabiliser |= op.flipMask;
+    });
+    for (let k = 0; k < 3; k++) mean[k] = reversedByStabiliser & (1 << k) ? 0 : mean[k] / order;
+    table.operations.forEach((op, o) => {
+      const image = loosePermutations[o]![a];
+      if (placed[image]) return;
+      // (+ 0 turns −0 into 0)
+      for (let k = 0; k < 3; k++) symmetrised[3 * image + k] = op.signs[k] * mean[k] + 0;
+      placed[image] = 1;
+    });
   }
   const atomPermutations = table.operations.map((op) => permutationUnderMap(symmetrised, kinds, diagonal(op), toleranceBohr)!);
 
