@@ -5,10 +5,11 @@
 import { Sequelize } from 'sequelize';
 import * as mariadb from 'mariadb';
 import { readSettings, type DatabaseSettings } from './config';
+import { applyMariadbRawQueryFix } from './mariadbRawQueryFix';
 
 /** A new connection to the given database; callers own it and must close it. */
 export function createSequelize(database: DatabaseSettings = readSettings().database): Sequelize {
-  return new Sequelize(database.name, database.user, database.password, {
+  const sequelize = new Sequelize(database.name, database.user, database.password, {
     dialect: 'mariadb',
     // Handing the driver over explicitly keeps Sequelize from a dynamic require bundlers cannot follow.
     dialectModule: mariadb,
@@ -21,6 +22,8 @@ export function createSequelize(database: DatabaseSettings = readSettings().data
     pool: { max: 5, min: 0, idle: 10_000, acquire: 10_000 },
     define: { underscored: true, charset: 'utf8mb4', collate: 'utf8mb4_unicode_ci' },
   });
+  applyMariadbRawQueryFix(sequelize);
+  return sequelize;
 }
 
 // Kept on globalThis so `next dev` reloads reuse the pool instead of opening a new one each time.

@@ -8,7 +8,7 @@ export const up: Migration = async ({ context: queryInterface }) => {
     {
       id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
       // Stored lower-case by the application, so a plain unique index makes e-mail case-insensitive.
-      email: { type: DataTypes.STRING(254), allowNull: false, unique: 'users_email_unique' },
+      email: { type: DataTypes.STRING(254), allowNull: false },
       display_name: { type: DataTypes.STRING(100), allowNull: false },
       password_hash: { type: DataTypes.STRING(100), allowNull: false },
       site_role: { type: DataTypes.ENUM('admin', 'member'), allowNull: false, defaultValue: 'member' },
@@ -17,6 +17,8 @@ export const up: Migration = async ({ context: queryInterface }) => {
     },
     tableOptions,
   );
+  // A named unique index (createTable ignores a named `unique` on a column).
+  await queryInterface.addIndex('users', ['email'], { unique: true, name: 'users_email_unique' });
 };
 
 export const down: Migration = async ({ context: queryInterface }) => {

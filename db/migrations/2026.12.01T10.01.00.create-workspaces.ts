@@ -8,7 +8,7 @@ export const up: Migration = async ({ context: queryInterface }) => {
     {
       id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
       name: { type: DataTypes.STRING(120), allowNull: false },
-      slug: { type: DataTypes.STRING(80), allowNull: false, unique: 'workspaces_slug_unique' },
+      slug: { type: DataTypes.STRING(80), allowNull: false },
       description: { type: DataTypes.STRING(2000), allowNull: false, defaultValue: '' },
       // A workspace outlives the account that made it.
       created_by: {
@@ -23,6 +23,8 @@ export const up: Migration = async ({ context: queryInterface }) => {
     },
     tableOptions,
   );
+  // A named unique index (createTable ignores a named `unique` on a column).
+  await queryInterface.addIndex('workspaces', ['slug'], { unique: true, name: 'workspaces_slug_unique' });
 };
 
 export const down: Migration = async ({ context: queryInterface }) => {

@@ -17,7 +17,7 @@ export const up: Migration = async ({ context: queryInterface }) => {
       email: { type: DataTypes.STRING(254), allowNull: false },
       role: { type: DataTypes.ENUM('owner', 'editor', 'viewer'), allowNull: false },
       // Only the SHA-256 of the token from the link is kept, so a database leak opens no invitation.
-      token_hash: { type: DataTypes.CHAR(64), allowNull: false, unique: 'invitations_token_hash_unique' },
+      token_hash: { type: DataTypes.CHAR(64), allowNull: false },
       invited_by: {
         type: DataTypes.INTEGER.UNSIGNED,
         allowNull: true,
@@ -40,6 +40,8 @@ export const up: Migration = async ({ context: queryInterface }) => {
     },
     tableOptions,
   );
+  // A named unique index (createTable ignores a named `unique` on a column).
+  await queryInterface.addIndex('invitations', ['token_hash'], { unique: true, name: 'invitations_token_hash_unique' });
   await queryInterface.addIndex('invitations', ['workspace_id'], { name: 'invitations_workspace_id' });
 };
 

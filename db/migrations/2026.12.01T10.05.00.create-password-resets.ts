@@ -15,7 +15,7 @@ export const up: Migration = async ({ context: queryInterface }) => {
         onUpdate: 'CASCADE',
       },
       // SHA-256 hex of the token in the e-mailed link; the token itself is never stored.
-      token_hash: { type: DataTypes.CHAR(64), allowNull: false, unique: 'password_resets_token_hash_unique' },
+      token_hash: { type: DataTypes.CHAR(64), allowNull: false },
       expires_at: { type: DataTypes.DATE(3), allowNull: false },
       used_at: { type: DataTypes.DATE(3), allowNull: true },
       created_at: { type: DataTypes.DATE(3), allowNull: false, defaultValue: Sequelize.literal('CURRENT_TIMESTAMP(3)') },
@@ -23,6 +23,8 @@ export const up: Migration = async ({ context: queryInterface }) => {
     },
     tableOptions,
   );
+  // A named unique index (createTable ignores a named `unique` on a column).
+  await queryInterface.addIndex('password_resets', ['token_hash'], { unique: true, name: 'password_resets_token_hash_unique' });
 };
 
 export const down: Migration = async ({ context: queryInterface }) => {
