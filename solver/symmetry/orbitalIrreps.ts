@@ -11,7 +11,8 @@
  * the S metric (Gram–Schmidt with pivoting). Rotating within a degenerate set leaves the SCF
  * solution, its energy and density unchanged. The degenerate sets are MOs whose orbital
  * energies differ by less than 1e-8 hartree (when `orbitalEnergies` is given), otherwise the
- * smallest sets of MOs that the group's operations mix among themselves.
+ * smallest sets of MOs that the group's operations mix among themselves; when an energy set
+ * cannot be symmetrised, the mixed set is used instead if its energies agree within 1e-6 hartree.
  *
  * Coefficients are row-major nFunctions × nOrbitals, MO j in column j: C[μ·nOrbitals + j].
  * The returned `coefficients` is the input array when nothing needed rotating, otherwise a new
@@ -20,6 +21,7 @@
  * as it was; its MOs are labelled by the sign of each character and listed in `impureOrbitals`.
  */
 import type { BasisSet } from '../types';
+import { SolverError } from '../errors';
 import { characterTable } from './characterTables';
 import { basisFunctionOperation } from './basisFunctionOperation';
 import type { MolecularSymmetry } from './symmetryFrame';
@@ -42,6 +44,7 @@ export interface OrbitalIrreps {
 /** |χ| may miss 1 by this much and the MO still counts as pure. */
 const PURITY_TOLERANCE = 1e-6;
 const DEGENERACY_HARTREE = 1e-8;
+const LOOSE_DEGENERACY_HARTREE = 1e-6;
 /** A projected part shorter than this (S-norm) is taken as zero. */
 const PROJECTION_FLOOR = 1e-3;
 
@@ -61,7 +64,7 @@ export function orbitalIrreps(
   // R acting on a coefficient vector, for every operation of the group.
   const maps = table.operations.map((op) => {
     const k = symmetry.operations.findIndex((o) => o.name === op.name);
-    if (k < 0) throw new Error(`symmetry data lacks ${op.symbol} of ${table.group}`);
+    if (k < 0) throw new SolverError('internal', `symmetry data lacks ${op.symbol} of ${table.group}`);
     return basisFunctionOperation(basis, op, symmetry.atomPermutations[k]);
   });
   const generatorOps = table.generators.map((g) => table.operations.findIndex((o) => o.name === g.name));
@@ -120,9 +123,22 @@ export function orbitalIrreps(
     const handled = new Set<number>();
     for (const j of impure) {
       if (handled.has(j)) continue;
-      const set = orbitalEnergies ? degenerateSet(j, orbitalEnergies, nOrbitals) : mixingSet(j);
+      let set = orbitalEnergies ? degenerateSet(j, orbitalEnergies, nOrbitals) : mixingSet(j);
+      let rotated = projectSet(set);
+      if (!rotated && orbitalEnergies) {
+        // An SCF converged loosely may split a degenerate pair by more than 1e-8 hartree; accept
+        // the set the operations actually mix if its energies still agree within 1e-6 hartree.
+        const mixing = mixingSet(j);
+        const energies = mixing.map((k) => orbitalEnergies[k]);
+        if (Math.max(...energies) - Math.min(...energies) < LOOSE_DEGENERACY_HARTREE) {
+          const retry = projectSet(mixing);
+          if (retry) {
+            set = mixing;
+            rotated = retry;
+          }
+        }
+      }
       set.forEach((k) => handled.add(k));
-      const rotated = projectSet(set);
       if (!rotated) {
         for (const k of set) if (deviations[k] > PURITY_TOLERANCE) stillImpure.push(k);
         continue;

@@ -125,8 +125,11 @@ describe('orbitalIrreps', () => {
         mixed[mu * n + q] = -Math.sin(0.5) * x + Math.cos(0.5) * y;
       }
     }
-    for (const useEnergies of [true, false]) {
-      const result = useEnergies ? orbitalIrreps(basis, frame, mixed, S, n, energies) : orbitalIrreps(basis, frame, mixed, S, n);
+    // A loosely converged SCF may split a degenerate pair by a little more than 1e-8 hartree.
+    const looseEnergies = Float64Array.from(energies);
+    looseEnergies[pairs[0][1]] += 5e-8;
+    for (const energiesGiven of [energies, looseEnergies, undefined]) {
+      const result = orbitalIrreps(basis, frame, mixed, S, n, energiesGiven);
       expect(result.maxDeviation).toBeGreaterThan(0.1);
       expect(result.impureOrbitals).toEqual([]);
       expect(result.symmetrised).toEqual(pairs.flat());
