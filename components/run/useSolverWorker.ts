@@ -1,0 +1,142 @@
+'use client';
+import { useCallback, useEffect, useRef, useState } from 'react';
+import * as Comlink from 'comlink';
+import type { SolverWorkerApi, WorkerOutcome } from '../../workers/solver.worker';
+import type { RunEstimate, RunResult } from '../../solver/run/result';
+import type { ProgressEvent } from '../../solver/types';
+import { applyProgress, EMPTY_PROGRESS, type ProgressLog } from './progressLog';
+
+/**
+ * The page's handle on the solver. Runs go to one dedicated worker; live estimates go to a
+ * second one, so typing keeps getting estimates while a long run holds the first. The
+ * form's inputs live in react-hook-form on the main thread, so a worker that crashes or is
+ * cancelled loses nothing the user typed.
+ */
+export type RunStatus = 'idle' | 'running' | 'done' | 'failed' | 'cancelled';
+
+export interface RunFailure {
+  /** 'crash' when the worker itself died; otherwise the solver's error code. */
+  code: string;
+  message: string;
+  field?: string;
+  issues?: { path: string; message: string }[];
+}
+
+interface SolverHandle {
+  worker: Worker;
+  api: Comlink.Remote<SolverWorkerApi>;
+}
+
+function spawnSolverWorker(onCrash: (message: string) => void): SolverHandle {
+  const worker = new Worker(new URL('../../workers/solver.worker.ts', import.meta.url), { type: 'module' });
+  worker.addEventListener('error', (event) => {
+    // An uncaught error or a failed allocation inside the worker; the worker is unusable after it.
+    event.preventDefault();
+    onCrash(event.message || 'the solver worker stopped without a message');
+  });
+  worker.addEventListener('messageerror', () => onCrash('the solver worker sent a message the page could not read'));
+  return { worker, api: Comlink.wrap<SolverWorkerApi>(worker) };
+}
+
+function crashText(detail: string): string {
+  return `The solver stopped unexpectedly (${detail}). Your inputs are kept; change them or press Run again.`;
+}
+
+export function useSolverWorker() {
+  const runHandle = useRef<SolverHandle | null>(null);
+  const estimateHandle = useRef<SolverHandle | null>(null);
+  /** Bumped by every run, cancel and crash: an answer from an older run is ignored. */
+  const runToken = useRef(0);
+  const [ready, setReady] = useState(false);
+  const [status, setStatus] = useState<RunStatus>('idle');
+  const [progress, setProgress] = useState<ProgressLog>(EMPTY_PROGRESS);
+  const [result, setResult] = useState<RunResult | null>(null);
+  const [failure, setFailure] = useState<RunFailure | null>(null);
+  const [lastRunFile, setLastRunFile] = useState<unknown>(null);
+
+  const spawnRunWorker = useCallback(() => {
+    const handle = spawnSolverWorker((message) => {
+      if (runHandle.current !== handle) return;
+      handle.worker.terminate();
+      runToken.current++;
+      setStatus((s) => (s === 'running' ? 'failed' : s));
+      setFailure({ code: 'crash', message: crashText(message) });
+      runHandle.current = spawnRunWorker();
+    });
+    return handle;
+  }, []);
+
+  const spawnEstimateWorker = useCallback(() => {
+    const handle = spawnSolverWorker(() => {
+      if (estimateHandle.current !== handle) return;
+      handle.worker.terminate();
+      estimateHandle.current = spawnEstimateWorker();
+    });
+    return handle;
+  }, []);
+
+  useEffect(() => {
+    runHandle.current = spawnRunWorker();
+    estimateHandle.current = spawnEstimateWorker();
+    setReady(true);
+    return () => {
+      runToken.current++;
+      runHandle.current?.worker.terminate();
+      estimateHandle.current?.worker.terminate();
+      runHandle.current = null;
+      estimateHandle.current = null;
+      setReady(false);
+    };
+  }, [spawnRunWorker, spawnEstimateWorker]);
+
+  const estimate = useCallback(async (runFile: unknown): Promise<WorkerOutcome<RunEstimate>> => {
+    const handle = estimateHandle.current;
+    if (!handle) return { ok: false, error: { code: 'internal', message: 'the solver is still starting' } };
+    try {
+      return await handle.api.estimate(runFile);
+    } catch (error) {
+      return { ok: false, error: { code: 'internal', message: error instanceof Error ? error.message : String(error) } };
+    }
+  }, []);
+
+  const run = useCallback(async (runFile: unknown): Promise<void> => {
+    const handle = runHandle.current;
+    if (!handle) return;
+    const token = ++runToken.current;
+    setStatus('running');
+    setProgress(EMPTY_PROGRESS);
+    setResult(null);
+    setFailure(null);
+    setLastRunFile(runFile);
+    const onProgress = (event: ProgressEvent) => {
+      if (token === runToken.current) setProgress((log) => applyProgress(log, event));
+    };
+    let outcome: WorkerOutcome<RunResult>;
+    try {
+      outcome = await handle.api.run(runFile, Comlink.proxy(onProgress));
+    } catch (error) {
+      outcome = { ok: false, error: { code: 'internal', message: error instanceof Error ? error.message : String(error) } };
+    }
+    if (token !== runToken.current) return;
+    if (outcome.ok) {
+      setResult(outcome.value);
+      setStatus('done');
+    } else {
+      const issues = Array.isArray(outcome.error.issues) ? (outcome.error.issues as RunFailure['issues']) : undefined;
+      setFailure({ code: outcome.error.code, message: outcome.error.message, field: outcome.error.field, issues });
+      setStatus('failed');
+    }
+  }, []);
+
+  /** Stop a run at once: a busy worker cannot be interrupted from inside, so it is replaced. */
+  const cancel = useCallback(() => {
+    runToken.current++;
+    runHandle.current?.worker.terminate();
+    runHandle.current = spawnRunWorker();
+    setStatus((s) => (s === 'running' ? 'cancelled' : s));
+  }, [spawnRunWorker]);
+
+  return { ready, status, progress, result, failure, lastRunFile, estimate, run, cancel };
+}
+
+export type SolverWorkerHandle = ReturnType<typeof useSolverWorker>;
