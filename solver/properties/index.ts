@@ -1,0 +1,2 @@
+export { mullikenCharges, nuclearCharge } from './mullikenCharges';
+export { dipoleMomentDebye, type DipoleMoment } from './dipoleMoment';

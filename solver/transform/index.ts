@@ -1,0 +1,3 @@
+export { moIntegrals, type MoIntegrals } from './moIntegrals';
+export { orbitalHamiltonian, type OrbitalHamiltonianInput } from './orbitalHamiltonian';
+export { transformEri, selectColumns, transformOneIndexPair } from './transformEri';
