@@ -145,12 +145,21 @@ function collectBodies(part: Part, found: { text: string | null; html: string | 
   if (/^\s*attachment/i.test(part.headers.get('content-disposition') ?? '')) return;
   const decoded = decodeTransfer(part.body, part.headers.get('content-transfer-encoding'));
   const charset = params.get('charset') ?? 'utf-8';
-  if (type === 'text/plain' && found.text === null) found.text = decodeBytes(decoded, charset);
-  else if (type === 'text/html' && found.html === null) found.html = decodeBytes(decoded, charset);
+  // On the wire every line ends in CRLF (RFC 5322 §2.1); stored text uses plain newlines.
+  if (type === 'text/plain' && found.text === null) found.text = decodeBytes(decoded, charset).replace(/\r\n/g, '\n');
+  else if (type === 'text/html' && found.html === null) found.html = decodeBytes(decoded, charset).replace(/\r\n/g, '\n');
 }
 
 export function parseMessage(raw: Buffer): ParsedMessage {
   const root = parsePart(raw);
+  // A single-part message ends with the CRLF that precedes SMTP's end-of-data line; it is not
+  // part of the text (in a multipart message the delimiter owns it, RFC 2046 §5.1.1).
+  const rootType = parseContentType(root.headers.get('content-type')).type;
+  if (!rootType.startsWith('multipart/')) {
+    const end = root.body.length;
+    if (end >= 2 && root.body[end - 2] === 0x0d && root.body[end - 1] === 0x0a) root.body = root.body.subarray(0, end - 2);
+    else if (end >= 1 && root.body[end - 1] === 0x0a) root.body = root.body.subarray(0, end - 1);
+  }
   const found: { text: string | null; html: string | null } = { text: null, html: null };
   collectBodies(root, found);
   const header = (name: string) => decodeEncodedWords(root.headers.get(name) ?? '');
