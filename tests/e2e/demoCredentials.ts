@@ -1,6 +1,8 @@
-/** The seeded site admin. The password comes from the demo seed, so it is written in one place only. */
+import { DEMO_PEOPLE } from '../../db/seeds/demoScenario';
+
+/** The seeded site admin, read from the demo seed so the password is written in one place only. */
 export function demoAdmin(): { email: string; password: string } {
-  const password = process.env.KETBOOK_DEMO_ADMIN_PASSWORD;
-  if (!password) throw new Error('KETBOOK_DEMO_ADMIN_PASSWORD is not set');
-  return { email: 'admin@ketbook.example', password };
+  const admin = DEMO_PEOPLE.find((p) => p.siteRole === 'admin');
+  if (!admin) throw new Error('the demo seed has no site admin');
+  return { email: admin.email, password: admin.password };
 }

@@ -6,9 +6,10 @@ export const dynamic = 'force-dynamic';
 /** Reports whether the database answers; used by the test runner and Playwright's webServer. */
 export async function GET() {
   try {
-    await getSequelize().query('SELECT 1');
+    await getSequelize().authenticate();
     return NextResponse.json({ status: 'ok', database: 'up' }, { headers: { 'cache-control': 'no-store' } });
-  } catch {
+  } catch (error) {
+    console.error('[health] database check failed:', (error as Error).message);
     return NextResponse.json({ status: 'degraded', database: 'down' }, { status: 503, headers: { 'cache-control': 'no-store' } });
   }
 }

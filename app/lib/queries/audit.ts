@@ -1,5 +1,6 @@
 import 'server-only';
-import type { Transaction } from 'sequelize';
+import type { InferCreationAttributes, Transaction } from 'sequelize';
+import type { AuditEntry } from '@/models';
 import { getModels } from '../server/db';
 
 export type AuditAction =
@@ -33,8 +34,8 @@ export interface AuditInput {
 
 export async function recordAudit(input: AuditInput): Promise<void> {
   const { AuditEntry } = getModels();
-  await AuditEntry.create(
-    {
+  // `detail` is a JSON column; the model types it loosely, so the attributes are typed here.
+  const attributes = {
       actorId: input.actorId,
       action: input.action,
       workspaceId: input.workspaceId ?? null,
@@ -42,9 +43,8 @@ export async function recordAudit(input: AuditInput): Promise<void> {
       targetId: input.targetId == null ? null : String(input.targetId),
       clientAddress: input.clientAddress ?? null,
       detail: input.detail ?? null,
-    },
-    { transaction: input.transaction },
-  );
+  } as InferCreationAttributes<AuditEntry>;
+  await AuditEntry.create(attributes, { transaction: input.transaction });
 }
 
 export interface AuditRow {
