@@ -14,8 +14,9 @@ const optionalNumber = { setValueAs: (v: unknown) => (v === '' || v === null || 
 
 /** Reference and basis-independent settings: which determinant the CI starts from. */
 export function ReferenceSection() {
-  const { register, control, formState } = useFormContext<RunFileInput>();
+  const { control, formState, setValue } = useFormContext<RunFileInput>();
   const systemType = useWatch({ control, name: 'system.type' });
+  const reference = useWatch({ control, name: 'reference' });
   const isModel = systemType !== 'molecule';
   return (
     <SectionCard title="Reference" testId="section-reference">
@@ -30,13 +31,20 @@ export function ReferenceSection() {
         }
       >
         {(c) => (
+          // Controlled, because "no reference" is the absence of the field, not a value of it.
           <select
             {...c}
             className={controlClass(Boolean(c['aria-invalid']))}
             data-testid="reference"
-            {...register('reference', { setValueAs: (v: unknown) => (v === '' ? undefined : v) })}
+            value={reference ?? ''}
+            onChange={(e) =>
+              setValue('reference', e.target.value === '' ? undefined : (e.target.value as RunFileInput['reference']), {
+                shouldValidate: true,
+                shouldDirty: true,
+              })
+            }
           >
-            {isModel ? <option value="">the model&apos;s own orbitals</option> : null}
+            {isModel || reference === undefined ? <option value="">{isModel ? "the model's own orbitals" : 'by multiplicity (RHF or ROHF)'}</option> : null}
             <option value="RHF">RHF</option>
             <option value="ROHF">ROHF</option>
             <option value="UHF">UHF</option>

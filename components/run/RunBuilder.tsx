@@ -30,7 +30,7 @@ export function RunBuilder({ solver }: { solver: SolverWorkerHandle }) {
     mode: 'onChange',
     defaultValues: clone(FIRST_PRESET.runFile),
   });
-  const { handleSubmit, reset, control, getValues, setValue, setError, formState, register } = form;
+  const { handleSubmit, reset, control, getValues, setValue, setError, formState, register, trigger } = form;
   const [source, setSource] = useState<SystemSource>('starter');
   const [presetId, setPresetId] = useState(FIRST_PRESET.id);
   const [xyzText, setXyzText] = useState('');
@@ -47,6 +47,11 @@ export function RunBuilder({ solver }: { solver: SolverWorkerHandle }) {
       : source === 'integrals' && values.system?.type !== 'integrals'
         ? 'Load an integral file to see the size of this run.'
         : null;
+  // Re-check the whole run file on every change: the schema's rules cross fields (RHF needs a
+  // singlet, CAS needs a window), so one edit can make or clear an error elsewhere.
+  useEffect(() => {
+    void trigger();
+  }, [valuesKey, trigger]);
   const estimate = useLiveEstimate(valuesKey, solver.estimate, solver.ready, blockedBy);
   const overBudget = estimate.kind === 'ok' && !estimate.estimate.withinBudget;
   const running = solver.status === 'running';
