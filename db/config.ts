@@ -29,7 +29,8 @@ type Env = Record<string, string | undefined>;
 
 /** Folder for local state (`.data/`): the project root is the working directory of every entry point. */
 export function dataDir(env: Env = process.env): string {
-  return path.resolve(env.KETBOOK_DATA_DIR ?? path.join(process.cwd(), '.data'));
+  // The ignore comments keep the bundler from tracing the whole project for this runtime path.
+  return path.resolve(/*turbopackIgnore: true*/ env.KETBOOK_DATA_DIR ?? path.join(/*turbopackIgnore: true*/ process.cwd(), '.data'));
 }
 
 function positiveInt(raw: string | undefined, fallback: number): number {
@@ -39,7 +40,7 @@ function positiveInt(raw: string | undefined, fallback: number): number {
 
 function readPersisted(file: string): string {
   try {
-    return fs.readFileSync(file, 'utf8').trim();
+    return fs.readFileSync(/*turbopackIgnore: true*/ file, 'utf8').trim();
   } catch {
     return '';
   }
