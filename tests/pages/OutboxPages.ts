@@ -10,7 +10,7 @@ export class OutboxPages {
     const row = this.page.getByTestId('outbox-row').filter({ has: this.page.getByTestId('outbox-to').getByText(email, { exact: false }) }).first();
     await expect(row).toBeVisible({ timeout: 20_000 });
     await row.getByTestId('outbox-open').click();
-    await expect(this.page.getByTestId('mail-to')).toContainText(email);
+    await expect(this.page.getByTestId('mail-to')).toContainText(email, { timeout: 20_000 });
   }
 
   async firstLinkHref(): Promise<string> {
