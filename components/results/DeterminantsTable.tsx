@@ -71,7 +71,8 @@ export function DeterminantsTable({ roots }: { roots: RootResult[] }) {
         </table>
       </div>
       <p className="mt-1 text-xs text-ink-soft">
-        Showing the {rows.length} largest of {root.leadingDeterminants.length === rows.length ? 'the' : ''} listed determinants; weight = coefficient².
+        The {rows.length} determinant{rows.length === 1 ? '' : 's'} of largest weight in root {rootIndex + 1} (weight = coefficient²); the run file&apos;s
+        output.leadingDeterminants sets how many are listed.
       </p>
     </div>
   );

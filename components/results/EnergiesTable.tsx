@@ -1,6 +1,6 @@
 'use client';
 import type { RunResult } from '../../solver/run/result';
-import { formatEnergy, shownUnitLabel } from './energyUnits';
+import { fixedNoNegativeZero, formatEnergy, shownUnitLabel } from './energyUnits';
 import { useEnergyUnitStore } from './useEnergyUnitStore';
 import { UnitSwitcher } from './UnitSwitcher';
 import { Formula, FORMULAS } from './Formula';
@@ -77,10 +77,10 @@ export function EnergiesTable({ result }: { result: RunResult }) {
                   <td className="py-1 pr-3" data-value={root.excitationEnergy}>
                     {fmt(root.excitationEnergy)}
                   </td>
-                  <td className="py-1 pr-3">{root.s2.toFixed(6)}</td>
+                  <td className="py-1 pr-3">{fixedNoNegativeZero(root.s2, 6)}</td>
                   <td className="py-1 pr-3">{root.multiplicity}</td>
                   <td className="py-1 pr-3">{root.irrep ?? '—'}</td>
-                  <td className="py-1">{root.referenceWeight.toFixed(6)}</td>
+                  <td className="py-1">{fixedNoNegativeZero(root.referenceWeight, 6)}</td>
                 </tr>
               ))}
             </tbody>

@@ -20,6 +20,9 @@ export function ResultsView({ result, runFile }: { result: RunResult; runFile: u
   const title = (runFile as { title?: string } | null)?.title;
   return (
     <div className="grid gap-4" data-testid="results">
+      <h2 className="text-xl font-bold tracking-tight text-ink" data-testid="results-title">
+        Result{title ? `: ${title}` : ''}
+      </h2>
       <div className="rounded-lg border-l-4 border-caution-500 bg-caution-50 p-3 text-sm text-caution-700" data-testid="results-caution" role="note">
         Minimal-basis numbers are qualitative; not for safety-relevant decisions.
       </div>

@@ -45,9 +45,15 @@ export function convertFromHartree(energyHartree: number, unit: EnergyUnit): num
  * factor converts, so they are always shown as they are.
  */
 export function formatEnergy(energy: number, unit: EnergyUnit, energyUnit: 'hartree' | 't'): string {
-  if (energyUnit === 't') return energy.toFixed(10);
+  if (energyUnit === 't') return fixedNoNegativeZero(energy, 10);
   const info = energyUnitInfo(unit);
-  return (energy * info.perHartree).toFixed(info.decimals);
+  return fixedNoNegativeZero(energy * info.perHartree, info.decimals);
+}
+
+/** toFixed without "-0.000…": a value that rounds to zero is shown as zero (e.g. ⟨S²⟩ = −1e-15). */
+export function fixedNoNegativeZero(value: number, decimals: number): string {
+  const text = value.toFixed(decimals);
+  return /^-0\.?0*$/.test(text) ? text.slice(1) : text;
 }
 
 /** The heading label of the unit actually shown. */

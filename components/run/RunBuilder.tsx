@@ -172,7 +172,7 @@ export function RunBuilder({ solver }: { solver: SolverWorkerHandle }) {
         <CiSpaceSection />
         <RootsSection />
 
-        <div className="sticky bottom-0 z-10 rounded-xl border border-ket-500/30 bg-ket-50/95 p-4 shadow-sm backdrop-blur">
+        <div className="rounded-xl border border-ket-500/30 bg-ket-50 p-4 shadow-sm" data-testid="run-bar">
           <EstimatePanel state={estimate} />
           <div className="mt-3 flex flex-wrap items-center gap-3">
             <button

@@ -45,3 +45,13 @@ describe('energy units of the results view', () => {
     expect(formatEnergy(E_C / EH_J, 'eV', 'hartree')).toBe('1.00000000'); // mathjs CODATA 2018 constants
   });
 });
+
+describe('fixed-point text without a negative zero', () => {
+  it('shows a value that rounds to zero as zero, and keeps real negatives', async () => {
+    const { fixedNoNegativeZero } = await import('../../../components/results/energyUnits');
+    expect(fixedNoNegativeZero(-1e-15, 6)).toBe('0.000000'); // common practice, no source
+    expect(fixedNoNegativeZero(-0.0000004, 6)).toBe('0.000000');
+    expect(fixedNoNegativeZero(-0.0000006, 6)).toBe('-0.000001');
+    expect(fixedNoNegativeZero(-2, 0)).toBe('-2');
+  });
+});
