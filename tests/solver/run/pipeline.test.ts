@@ -48,7 +48,9 @@ describe('published SCF energies through the whole pipeline', () => {
   it('HeH+ with the scaled exponents of the worked example', async () => {
     // Szabo & Ostlund (1996) §3.5.3: ζ(He) = 2.0925, ζ(H) = 1.24, R = 1.4632 bohr, E = −2.8606 Eh.
     const r = await run(molecule([['He', 0, 0, 0], ['H', 0, 0, 1.4632]], { charge: 1, zeta: { He: 2.0925, H: 1.24 } }));
-    expect(r.energies.reference).toBeCloseTo(-2.8606, 4);
+    // The book prints the energy cut to four decimals, so the computed value lies within that last digit.
+    expect(r.energies.reference).toBeLessThanOrEqual(-2.8606);
+    expect(r.energies.reference).toBeGreaterThan(-2.8607);
   });
 
   it('He atom: STO-3G SCF, above the HF limit; FCI above the exact energy', async () => {
