@@ -20,6 +20,11 @@ class RunPage {
     await this.page.getByTestId('ci-space').selectOption(space);
   }
 
+  /** Pick the CI space without touching the system (for uploaded or pasted systems). */
+  async choosePresetless(space: string) {
+    await this.page.getByTestId('ci-space').selectOption(space);
+  }
+
   estimate() {
     return this.page.getByTestId('estimate');
   }
@@ -138,4 +143,24 @@ test('a run over the memory budget is refused with what to change, and Run is of
   await expect(page.getByTestId('estimate-refusal')).toContainText('budget', { timeout: 20_000 });
   await expect(page.getByTestId('estimate-refusal')).toContainText('To shrink it');
   await expect(page.getByTestId('run-button')).toBeDisabled();
+});
+
+test('an uploaded integral file runs, and a file that is not an integral layout is refused beside the upload', async ({ page }) => {
+  const runPage = new RunPage(page);
+  await runPage.open();
+  await page.getByTestId('source-integrals').click();
+  await page.getByTestId('integrals-file').setInputFiles({ name: 'bad.json', mimeType: 'application/json', buffer: Buffer.from('{"type":"molecule"}') });
+  await expect(page.getByTestId('integrals-file-error')).toContainText('"type": "integrals"');
+  await expect(runPage.estimate()).toContainText('Load an integral file');
+
+  // Two sites, hopping t = 1 (h01 = −1), on-site repulsion U = 4, two electrons, in Ketbook's integral layout.
+  const U = 4;
+  const layout = { type: 'integrals', orbitals: 2, electrons: 2, multiplicity: 1, coreEnergy: 0, oneBody: [[0, -1], [-1, 0]], twoBody: [[0, 0, 0, 0, U], [1, 1, 1, 1, U]] };
+  await page.getByTestId('integrals-file').setInputFiles({ name: 'dimer.json', mimeType: 'application/json', buffer: Buffer.from(JSON.stringify(layout)) });
+  await expect(page.getByTestId('integrals-summary')).toContainText('2 orbitals');
+  await runPage.choosePresetless('FCI');
+  await runPage.run();
+  const energy = await runPage.rootEnergy(0);
+  // Analytic two-site Hubbard singlet ground state: E = U/2 − √(U²/4 + 4t²) (common practice, no source).
+  expect(energy).toBeCloseTo(U / 2 - Math.sqrt((U * U) / 4 + 4), 9);
 });
