@@ -46,7 +46,7 @@ export function RunStatusPanel({ solver }: { solver: SolverWorkerHandle }) {
           ) : null}
           {lastScf ? (
             <>
-              <dt className="text-ink-soft">SCF</dt>
+              <dt className="text-ink-soft">SCF (last reported)</dt>
               <dd className="font-mono" data-testid="progress-scf">
                 iteration {lastScf.iteration}: {lastScf.energyHartree.toFixed(10)} Eh, error {lastScf.error.toExponential(2)}
               </dd>
