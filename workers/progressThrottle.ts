@@ -15,6 +15,11 @@ export function throttleProgress(
   let pending: ProgressEvent | undefined;
   const push = (event: ProgressEvent) => {
     const t = now();
+    if (event.phase !== lastPhase && pending) {
+      // The last event held back from the phase that just ended (e.g. the converged SCF iteration).
+      sink(pending);
+      pending = undefined;
+    }
     if (event.phase !== lastPhase || t - lastSent >= intervalMs) {
       lastPhase = event.phase;
       lastSent = t;
