@@ -47,6 +47,7 @@ export async function runCalculation(runFile: RunFile, options: RunOptions = {})
     lap('scf');
   }
 
+  if (reference) warnings.push(...reference.warnings);
   const nOrbitals = prepared.kind === 'molecule' ? prepared.basis.nFunctions : prepared.hamiltonian.nOrbitals;
   const nuclearRepulsion = prepared.kind === 'molecule' ? prepared.nuclearRepulsionHartree : 0;
   const coreEnergyOfSystem = prepared.kind === 'molecule' ? prepared.nuclearRepulsionHartree : prepared.hamiltonian.coreEnergy;

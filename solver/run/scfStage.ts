@@ -18,6 +18,7 @@ export interface ReferenceOrbitals {
   /** Irrep index per MO (XOR-multiplying), when the molecule's symmetry is used. */
   irreps: Int32Array | null;
   summary: ScfSummary;
+  warnings: string[];
 }
 
 export interface ScfStageOptions {
@@ -48,6 +49,7 @@ function defaultReference(twoS: number): 'RHF' | 'ROHF' {
 function solveReference(problem: ScfProblem, runFile: RunFile, reference: 'RHF' | 'UHF' | 'ROHF', onProgress?: ProgressSink) {
   let scf = runScf(problem, scfOptionsFor(runFile, reference, onProgress));
   let stability: ScfSummary['stability'] = null;
+  const warnings: string[] = [];
   if (runFile.scf?.stability ?? true) {
     let analysis = stabilityAnalysis(problem, scf);
     if (!analysis.stable && runFile.scf?.followInstability) {
@@ -60,8 +62,19 @@ function solveReference(problem: ScfProblem, runFile: RunFile, reference: 'RHF' 
       uhfToUhf: analysis.uhfToUhf?.lowestEigenvalue,
       stable: analysis.stable,
     };
+    if (!analysis.analysed) {
+      warnings.push(`stability analysis is not available for ${reference}; the solution was not checked`);
+    } else if (!analysis.stable) {
+      const kind = analysis.instability?.kind;
+      const eigenvalue = analysis.instability?.lowestEigenvalue.toExponential(3);
+      warnings.push(
+        kind === 'rhf-to-uhf'
+          ? `the RHF solution is unstable towards UHF (lowest triplet orbital-Hessian eigenvalue ${eigenvalue} Eh): a lower, spin-broken UHF solution exists; the RHF orbitals remain a valid CI reference`
+          : `the ${reference} solution is unstable (${kind ?? 'orbital'} instability, lowest orbital-Hessian eigenvalue ${eigenvalue} Eh): a lower solution of the same kind exists; set scf.followInstability to follow it`,
+      );
+    }
   }
-  return { scf, stability };
+  return { scf, stability, warnings };
 }
 
 function summarise(scf: ScfResult, stability: ScfSummary['stability'], extra: Partial<ScfSummary>): ScfSummary {
@@ -109,7 +122,7 @@ export function moleculeScf(prepared: PreparedMolecule, runFile: RunFile, { onPr
     nBeta,
   };
   const reference = runFile.reference ?? defaultReference(prepared.twoS);
-  const { scf, stability } = solveReference(problem, runFile, reference, onProgress);
+  const { scf, stability, warnings } = solveReference(problem, runFile, reference, onProgress);
 
   let irreps: Int32Array | null = null;
   let coefficients = scf.coefficients.alpha;
@@ -141,6 +154,7 @@ export function moleculeScf(prepared: PreparedMolecule, runFile: RunFile, { onPr
       mullikenCharges: Array.from(charges),
       dipole: { vectorAu: Array.from(dipole.vectorAu), magnitudeDebye: dipole.magnitudeDebye },
     }),
+    warnings,
   };
 }
 
@@ -162,7 +176,7 @@ export function modelScf(prepared: PreparedModel, runFile: RunFile, { onProgress
     nAlpha: (prepared.nElectrons + prepared.twoS) / 2,
     nBeta: (prepared.nElectrons - prepared.twoS) / 2,
   };
-  const { scf, stability } = solveReference(problem, runFile, runFile.reference!, onProgress);
+  const { scf, stability, warnings } = solveReference(problem, runFile, runFile.reference!, onProgress);
   return {
     problem,
     scf,
@@ -170,6 +184,7 @@ export function modelScf(prepared: PreparedModel, runFile: RunFile, { onProgress
     orbitalEnergies: scf.orbitalEnergies.alpha,
     irreps: null,
     summary: summarise(scf, stability, {}),
+    warnings,
   };
 }
 
