@@ -16,7 +16,7 @@ export class AuditEntry extends Model<InferAttributes<AuditEntry>, InferCreation
   declare targetType: CreationOptional<string | null>;
   declare targetId: CreationOptional<string | null>;
   declare clientAddress: CreationOptional<string | null>;
-  declare detail: CreationOptional<unknown>;
+  declare detail: CreationOptional<Record<string, unknown> | null>;
   declare createdAt: CreationOptional<Date>;
 }
 
