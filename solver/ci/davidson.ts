@@ -1,14 +1,29 @@
 /**
  * Block Davidson eigensolver for the lowest roots of a large real symmetric matrix known
- * only through its action (Davidson, J. Comput. Phys. 17, 87 (1975)).
+ * only through its action (Davidson, J. Comput. Phys. 17, 87 (1975); block form after
+ * Liu, report NRCC LBL-8158 (1978)).
  *
- * Each iteration: Rayleigh–Ritz in the subspace V (G = Vᵀ·A·V), residuals
- * r = A x − θ x for the tracked roots, corrections δ = r / (θ − D) with the diagonal
- * preconditioner D (denominators kept away from zero), two passes of Gram–Schmidt against
- * V, and new vectors appended. When the subspace would exceed maxSubspace it collapses
- * (thick restart) to its lowest max(2·roots, maxSubspace/2) Ritz vectors, whose A-images are
- * formed from the stored ones, no extra matrix products. A root is converged when its residual norm ≤ residualTolerance AND its
- * energy changed by ≤ energyTolerance since the previous iteration.
+ * Storage: the orthonormal subspace V and its images AV live in two flat Float64Arrays of
+ * capacity·N entries (vector i at [i·N, (i+1)·N)), and the subspace matrix G = Vᵀ·A·V in a
+ * small row-major array. Adding a vector costs one matrix product plus O(N·m) dot products
+ * for its new row and column of G; nothing already in G is recomputed.
+ *
+ * Each iteration: Rayleigh–Ritz in the subspace, then for every tracked root one pass over
+ * V and AV forms its Ritz vector x and residual r = A x − θ x together. Corrections:
+ *   'davidson'  δ = r / (θ − D), D the diagonal (Davidson 1975);
+ *   'olsen'     δ = (θ − D)⁻¹ (r − ε x), ε = xᵀ(θ − D)⁻¹r / xᵀ(θ − D)⁻¹x, which removes the
+ *               component along x that the plain correction would reproduce
+ *               (Olsen, Jørgensen & Simons, Chem. Phys. Lett. 169, 463 (1990)).
+ * Denominators are kept at least 1e-8 away from zero. Each correction is orthogonalised
+ * twice (classical Gram–Schmidt) against V and normalised; if it lies in the span the
+ * residual is tried instead.
+ *
+ * When the subspace would exceed maxSubspace it collapses in place (thick restart) to its
+ * lowest max(2·roots, maxSubspace/2) Ritz vectors; their images are the same combinations
+ * of the stored AV, so the restart costs no matrix products, and G becomes diagonal.
+ *
+ * A root is converged when its residual norm ≤ residualTolerance AND its energy changed by
+ * ≤ energyTolerance since the previous iteration. Work arrays are allocated once.
  */
 import { EigenvalueDecomposition, Matrix } from 'ml-matrix';
 import { SolverError } from '../errors';
@@ -19,12 +34,16 @@ export interface DavidsonIteration {
   residualNorms: number[];
 }
 
+export type DavidsonCorrection = 'davidson' | 'olsen';
+
 export interface DavidsonOptions {
   roots: number;
   maxIterations: number;
   residualTolerance: number;
   energyTolerance: number;
   maxSubspace: number;
+  /** Correction vector formula (default 'olsen'). */
+  correction?: DavidsonCorrection;
   onIteration?: (record: DavidsonIteration) => void;
   shouldCancel?: () => boolean;
 }
@@ -36,39 +55,40 @@ export interface DavidsonResult {
   matrixProducts: number;
 }
 
-function dot(a: Float64Array, b: Float64Array): number {
-  let s = 0;
-  for (let i = 0; i < a.length; i++) s += a[i] * b[i];
-  return s;
-}
-
-/** Orthogonalise v against basis (two passes) and normalise; returns false when v lies in its span. */
-function orthonormaliseAgainst(v: Float64Array, basis: Float64Array[]): boolean {
-  let norm = Math.sqrt(dot(v, v));
-  if (!(norm > 0)) return false;
-  for (let i = 0; i < v.length; i++) v[i] /= norm;
-  for (let pass = 0; pass < 2; pass++) {
-    for (const b of basis) {
-      const overlap = dot(b, v);
-      for (let i = 0; i < v.length; i++) v[i] -= overlap * b[i];
-    }
+/** Σ a[ao + t]·b[bo + t] for t < len. */
+function dotAt(a: Float64Array, ao: number, b: Float64Array, bo: number, len: number): number {
+  let s0 = 0;
+  let s1 = 0;
+  let t = 0;
+  for (; t + 1 < len; t += 2) {
+    s0 += a[ao + t] * b[bo + t];
+    s1 += a[ao + t + 1] * b[bo + t + 1];
   }
-  norm = Math.sqrt(dot(v, v));
-  if (norm < 1e-8) return false;
-  for (let i = 0; i < v.length; i++) v[i] /= norm;
-  return true;
+  if (t < len) s0 += a[ao + t] * b[bo + t];
+  return s0 + s1;
 }
 
-function symmetricEigen(G: number[][]): { values: number[]; vectors: number[][] } {
-  const m = G.length;
-  const eig = new EigenvalueDecomposition(new Matrix(G), { assumeSymmetric: true });
-  const values = eig.realEigenvalues;
-  const V = eig.eigenvectorMatrix;
-  const order = values.map((_, i) => i).sort((a, b) => values[a] - values[b]);
-  return {
-    values: order.map((i) => values[i]),
-    vectors: order.map((i) => Array.from({ length: m }, (_, r) => V.get(r, i))),
-  };
+/** Symmetric eigenproblem of the leading m×m block of a row-major array (ascending values). */
+function smallEigen(G: Float64Array, stride: number, m: number): { values: Float64Array; vectors: Float64Array } {
+  const rows: number[][] = [];
+  for (let i = 0; i < m; i++) {
+    const row = new Array<number>(m);
+    // symmetrise against round-off
+    for (let j = 0; j < m; j++) row[j] = 0.5 * (G[i * stride + j] + G[j * stride + i]);
+    rows.push(row);
+  }
+  const eig = new EigenvalueDecomposition(new Matrix(rows), { assumeSymmetric: true });
+  const raw = eig.realEigenvalues;
+  const E = eig.eigenvectorMatrix;
+  const order = raw.map((_, i) => i).sort((a, b) => raw[a] - raw[b]);
+  const values = new Float64Array(m);
+  // vectors[r·m + i] = component i of the r-th lowest eigenvector
+  const vectors = new Float64Array(m * m);
+  order.forEach((col, r) => {
+    values[r] = raw[col];
+    for (let i = 0; i < m; i++) vectors[r * m + i] = E.get(i, col);
+  });
+  return { values, vectors };
 }
 
 export function davidson(
@@ -79,135 +99,169 @@ export function davidson(
 ): DavidsonResult {
   const N = diagonal.length;
   const k = options.roots;
-  const maxSubspace = Math.max(options.maxSubspace, 2 * k);
-  const V: Float64Array[] = [];
-  const S: Float64Array[] = [];
-  const G: number[][] = [];
+  const maxSubspace = Math.min(N, Math.max(options.maxSubspace, 2 * k));
+  const capacity = Math.min(N, Math.max(maxSubspace, guesses.length));
+  const useOlsen = (options.correction ?? 'olsen') === 'olsen';
+  const V = new Float64Array(capacity * N);
+  const AV = new Float64Array(capacity * N);
+  const G = new Float64Array(capacity * capacity);
+  const ritzX = Array.from({ length: k }, () => new Float64Array(N));
+  const residual = Array.from({ length: k }, () => new Float64Array(N));
+  const candidate = new Float64Array(N);
+  const overlaps = new Float64Array(capacity);
+  let m = 0; // vectors in V (with images in AV and rows in G)
+  let pending = 0; // orthonormal vectors in V[m … m+pending) still without images
   let products = 0;
-  const pending: Float64Array[] = [];
+
+  /** Orthogonalise `candidate` against V[0 … m+pending), normalise and append it; false if it lies in the span. */
+  const appendCandidate = (): boolean => {
+    const count = m + pending;
+    if (count >= capacity) return false;
+    let norm = Math.sqrt(dotAt(candidate, 0, candidate, 0, N));
+    if (!(norm > 0)) return false;
+    for (let t = 0; t < N; t++) candidate[t] /= norm;
+    for (let pass = 0; pass < 2; pass++) {
+      for (let i = 0; i < count; i++) overlaps[i] = dotAt(V, i * N, candidate, 0, N);
+      for (let i = 0; i < count; i++) {
+        const o = overlaps[i];
+        const off = i * N;
+        for (let t = 0; t < N; t++) candidate[t] -= o * V[off + t];
+      }
+    }
+    norm = Math.sqrt(dotAt(candidate, 0, candidate, 0, N));
+    if (norm < 1e-8) return false;
+    const off = count * N;
+    for (let t = 0; t < N; t++) V[off + t] = candidate[t] / norm;
+    pending++;
+    return true;
+  };
+
   for (const g of guesses) {
-    const v = Float64Array.from(g);
-    if (orthonormaliseAgainst(v, [...V, ...pending])) pending.push(v);
+    candidate.set(g);
+    appendCandidate();
   }
-  if (pending.length < k) throw new SolverError('internal', `Davidson needs ${k} independent start vectors, got ${pending.length}`);
+  if (pending < k) throw new SolverError('internal', `Davidson needs ${k} independent start vectors, got ${pending}`);
+
   const history: DavidsonIteration[] = [];
-  let previous: number[] = new Array(k).fill(Number.POSITIVE_INFINITY);
-  let ritzX: Float64Array[] = [];
-  let ritzAX: Float64Array[] = [];
-  let theta: number[] = [];
+  const previous = new Float64Array(k).fill(Number.POSITIVE_INFINITY);
+  const theta = new Float64Array(k);
+  const residualNorms = new Float64Array(k);
 
   for (let iteration = 1; iteration <= options.maxIterations; iteration++) {
     if (options.shouldCancel?.()) throw new SolverError('cancelled', 'the CI calculation was cancelled');
-    // extend the subspace with the pending vectors
-    for (const v of pending) {
-      const av = new Float64Array(N);
-      apply(v, av);
+    // images of the pending vectors and their new rows/columns of G
+    for (; pending > 0; pending--, m++) {
+      const vj = V.subarray(m * N, (m + 1) * N);
+      const avj = AV.subarray(m * N, (m + 1) * N);
+      avj.fill(0);
+      apply(vj, avj);
       products++;
-      V.push(v);
-      S.push(av);
-      const j = V.length - 1;
-      G.push(new Array(j + 1).fill(0));
-      for (let i = 0; i <= j; i++) {
-        const gij = dot(V[i], av);
-        G[j][i] = gij;
-        if (i < j) G[i][j] = gij;
+      for (let i = 0; i <= m; i++) {
+        const gij = dotAt(V, i * N, AV, m * N, N);
+        G[m * capacity + i] = gij;
+        G[i * capacity + m] = gij;
       }
     }
-    pending.length = 0;
-    const m = V.length;
-    // symmetrise against round-off before the small eigenproblem
-    const Gs = G.map((row, i) => row.map((_, j) => 0.5 * (G[i][j] + G[j][i])));
-    const { values, vectors: y } = symmetricEigen(Gs);
-    theta = values.slice(0, k);
-    ritzX = [];
-    ritzAX = [];
-    const residualNorms: number[] = [];
-    const residuals: Float64Array[] = [];
+    const { values, vectors: y } = smallEigen(G, capacity, m);
     for (let r = 0; r < k; r++) {
-      const x = new Float64Array(N);
-      const ax = new Float64Array(N);
+      theta[r] = values[r];
+      // one pass over V and AV: x = V y, r = AV y − θ x
+      const x = ritzX[r];
+      const res = residual[r];
+      x.fill(0);
+      res.fill(0);
       for (let i = 0; i < m; i++) {
-        const yi = y[r][i];
+        const yi = y[r * m + i];
         if (yi === 0) continue;
-        const vi = V[i];
-        const si = S[i];
+        const off = i * N;
         for (let t = 0; t < N; t++) {
-          x[t] += yi * vi[t];
-          ax[t] += yi * si[t];
+          x[t] += yi * V[off + t];
+          res[t] += yi * AV[off + t];
         }
       }
-      const res = new Float64Array(N);
-      for (let t = 0; t < N; t++) res[t] = ax[t] - theta[r] * x[t];
-      ritzX.push(x);
-      ritzAX.push(ax);
-      residuals.push(res);
-      residualNorms.push(Math.sqrt(dot(res, res)));
+      const th = theta[r];
+      for (let t = 0; t < N; t++) res[t] -= th * x[t];
+      residualNorms[r] = Math.sqrt(dotAt(res, 0, res, 0, N));
     }
-    const record = { iteration, energies: theta.slice(), residualNorms };
+    const record: DavidsonIteration = { iteration, energies: Array.from(theta), residualNorms: Array.from(residualNorms) };
     history.push(record);
     options.onIteration?.(record);
-    const converged = theta.map(
-      (e, r) => residualNorms[r] <= options.residualTolerance && Math.abs(e - previous[r]) <= options.energyTolerance,
-    );
-    previous = theta.slice();
-    if (converged.every(Boolean) || m >= N) {
-      return { energies: theta, vectors: ritzX, history, matrixProducts: products };
-    }
-    // corrections for the roots still moving
-    const corrections: Float64Array[] = [];
+    let allConverged = true;
+    const needsCorrection: number[] = [];
     for (let r = 0; r < k; r++) {
-      if (converged[r]) continue;
-      if (residualNorms[r] <= options.residualTolerance) {
-        continue; // residual already small: only the energy test is pending, which the next iteration settles
-      }
-      const delta = new Float64Array(N);
-      for (let t = 0; t < N; t++) {
-        let denom = theta[r] - diagonal[t];
-        if (Math.abs(denom) < 1e-8) denom = denom < 0 ? -1e-8 : 1e-8;
-        delta[t] = residuals[r][t] / denom;
-      }
-      corrections.push(delta);
-      corrections.push(residuals[r]); // fallback when the preconditioned vector lies in the span
+      const small = residualNorms[r] <= options.residualTolerance;
+      if (!(small && Math.abs(theta[r] - previous[r]) <= options.energyTolerance)) allConverged = false;
+      // a small residual with the energy still to settle needs no new direction: the next iteration decides
+      if (!small) needsCorrection.push(r);
     }
-    if (m + corrections.length / 2 > maxSubspace) {
-      // thick restart: keep the lowest `keep` Ritz vectors (orthonormal, images known from
-      // the stored products), which retains more than the tracked roots' directions
+    previous.set(theta);
+    if (allConverged || m >= N) {
+      return { energies: Array.from(theta), vectors: ritzX.map((x) => Float64Array.from(x)), history, matrixProducts: products };
+    }
+    if (m + needsCorrection.length > maxSubspace) {
       const keep = Math.min(m, Math.max(2 * k, Math.floor(maxSubspace / 2)));
-      const keptX = ritzX.slice();
-      const keptAX = ritzAX.slice();
-      for (let r = k; r < keep; r++) {
-        const x = new Float64Array(N);
-        const ax = new Float64Array(N);
-        for (let i = 0; i < m; i++) {
-          const yi = y[r][i];
-          const vi = V[i];
-          const si = S[i];
-          for (let t = 0; t < N; t++) {
-            x[t] += yi * vi[t];
-            ax[t] += yi * si[t];
-          }
+      collapse(V, N, m, keep, y);
+      collapse(AV, N, m, keep, y);
+      G.fill(0);
+      for (let r = 0; r < keep; r++) G[r * capacity + r] = values[r];
+      m = keep;
+    }
+    for (const r of needsCorrection) {
+      const th = theta[r];
+      const res = residual[r];
+      let epsilon = 0;
+      if (useOlsen) {
+        const x = ritzX[r];
+        let xr = 0;
+        let xx = 0;
+        for (let t = 0; t < N; t++) {
+          const inv = 1 / clampedDenominator(th - diagonal[t]);
+          xr += x[t] * inv * res[t];
+          xx += x[t] * inv * x[t];
         }
-        keptX.push(x);
-        keptAX.push(ax);
+        epsilon = xx !== 0 ? xr / xx : 0;
+        for (let t = 0; t < N; t++) candidate[t] = (res[t] - epsilon * x[t]) / clampedDenominator(th - diagonal[t]);
+      } else {
+        for (let t = 0; t < N; t++) candidate[t] = res[t] / clampedDenominator(th - diagonal[t]);
       }
-      V.length = 0;
-      S.length = 0;
-      G.length = 0;
-      for (let r = 0; r < keep; r++) {
-        V.push(keptX[r]);
-        S.push(keptAX[r]);
-        G.push(Array.from({ length: r + 1 }, (_, i) => (i === r ? values[r] : 0)));
-        for (let i = 0; i < r; i++) G[i].push(0);
+      if (!appendCandidate()) {
+        candidate.set(res);
+        appendCandidate(); // fallback when the preconditioned vector lies in the span
       }
     }
-    for (let c = 0; c < corrections.length; c += 2) {
-      const delta = corrections[c];
-      if (orthonormaliseAgainst(delta, [...V, ...pending])) pending.push(delta);
-      else {
-        const res = Float64Array.from(corrections[c + 1]);
-        if (orthonormaliseAgainst(res, [...V, ...pending])) pending.push(res);
-      }
+    if (pending === 0) {
+      throw new SolverError('not-converged', 'Davidson found no new direction to add (the subspace stopped growing)', { details: history });
     }
   }
   throw new SolverError('not-converged', `Davidson did not converge in ${options.maxIterations} iterations`, { details: history });
+}
+
+function clampedDenominator(d: number): number {
+  if (Math.abs(d) < 1e-8) return d < 0 ? -1e-8 : 1e-8;
+  return d;
+}
+
+const COLLAPSE_CHUNK = 512;
+
+/**
+ * In place: the first `keep` vectors of the flat store become Σ_i y[r·m + i]·old_i, r < keep.
+ * Works on chunks of COLLAPSE_CHUNK entries so the old values of every vector in a chunk are
+ * read before any is overwritten, with one small scratch block instead of a second store.
+ */
+function collapse(store: Float64Array, N: number, m: number, keep: number, y: Float64Array): void {
+  const scratch = new Float64Array(m * COLLAPSE_CHUNK);
+  for (let t0 = 0; t0 < N; t0 += COLLAPSE_CHUNK) {
+    const len = Math.min(COLLAPSE_CHUNK, N - t0);
+    for (let i = 0; i < m; i++) scratch.set(store.subarray(i * N + t0, i * N + t0 + len), i * COLLAPSE_CHUNK);
+    for (let r = 0; r < keep; r++) {
+      const out = r * N + t0;
+      store.fill(0, out, out + len);
+      for (let i = 0; i < m; i++) {
+        const yi = y[r * m + i];
+        if (yi === 0) continue;
+        const src = i * COLLAPSE_CHUNK;
+        for (let t = 0; t < len; t++) store[out + t] += yi * scratch[src + t];
+      }
+    }
+  }
 }

@@ -18,7 +18,7 @@
 import { EigenvalueDecomposition, Matrix } from 'ml-matrix';
 import { badInput, SolverError } from '../errors';
 import type { OrbitalHamiltonian } from '../types';
-import { davidson, DavidsonIteration } from './davidson';
+import { davidson, DavidsonCorrection, DavidsonIteration } from './davidson';
 import { DENSE_LIMIT_DETERMINANTS, defaultMaxSubspace } from './davidsonSettings';
 import { denseHamiltonian } from './denseHamiltonian';
 import { spinSquared } from './densities';
@@ -36,6 +36,8 @@ export interface SolveCiOptions {
   residualTolerance?: number;
   energyTolerance?: number;
   maxSubspace?: number;
+  /** Davidson correction formula, default 'olsen' (see davidson.ts). */
+  correction?: DavidsonCorrection;
   budgetBytes?: number;
   onProgress?: (event: { phase: 'davidson'; iteration: number; energies: number[]; residualNorms: number[] }) => void;
   shouldCancel?: () => boolean;
@@ -174,6 +176,7 @@ export function solveCi(ham: OrbitalHamiltonian, spec: CiSpaceSpec, options: Sol
         residualTolerance: options.residualTolerance ?? 1e-7,
         energyTolerance: options.energyTolerance ?? 1e-12,
         maxSubspace: Math.min(N, options.maxSubspace ?? defaultMaxSubspace(tracked)),
+        correction: options.correction,
         shouldCancel: options.shouldCancel,
         onIteration: (record) => {
           const entry = { iteration: iterations.length + 1, energies: record.energies, residualNorms: record.residualNorms };

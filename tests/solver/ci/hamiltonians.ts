@@ -43,3 +43,40 @@ export function randomHamiltonian(n: number, seed: number, irreps?: number[]): O
   }
   return ham;
 }
+
+/**
+ * A Hamiltonian that behaves like a small molecule's in its own canonical HF orbitals:
+ * orbital energies spread over −0.6 … −0.35 Eh (occupied) and +0.35 … +0.8 Eh (virtual),
+ * Coulomb integrals (pp|qq) ≈ 0.2–0.4, exchange (pq|qp) ≈ 0.03–0.1 and every other
+ * integral ≈ ±0.005–0.03, all with the 8-fold symmetry of real orbitals. The one-electron
+ * matrix is chosen so that the closed-shell Fock matrix of the lowest nOccupied orbitals
+ * is diagonal with those orbital energies, h_pq = ε_p δ_pq − Σ_k [2(pq|kk) − (pk|kq)]
+ * (Szabo & Ostlund (1996) eq. 3.154), so the aufbau determinant satisfies Brillouin's
+ * theorem and the CI matrix is diagonally dominant, as for a molecule near equilibrium.
+ */
+export function moleculeLikeHamiltonian(n: number, seed: number, nOccupied: number = Math.floor(n / 2)): OrbitalHamiltonian {
+  const rand = seededRandom(seed);
+  const eri = new Float64Array(eriLength(n));
+  for (let i = 0; i < eri.length; i++) eri[i] = (rand() < 0.5 ? -1 : 1) * (0.005 + 0.025 * rand());
+  for (let p = 0; p < n; p++) {
+    for (let q = 0; q < n; q++) {
+      if (p === q) continue;
+      eri[eriIndex(p, p, q, q)] = 0.2 + 0.2 * rand();
+      eri[eriIndex(p, q, q, p)] = 0.03 + 0.07 * rand();
+    }
+    eri[eriIndex(p, p, p, p)] = 0.5 + 0.2 * rand();
+  }
+  const orbitalEnergies = new Float64Array(n);
+  const nVirtual = n - nOccupied;
+  for (let p = 0; p < nOccupied; p++) orbitalEnergies[p] = -0.6 + (nOccupied > 1 ? (0.25 * p) / (nOccupied - 1) : 0) + 0.02 * rand();
+  for (let a = 0; a < nVirtual; a++) orbitalEnergies[nOccupied + a] = 0.35 + (nVirtual > 1 ? (0.45 * a) / (nVirtual - 1) : 0) + 0.02 * rand();
+  const h = new Float64Array(n * n);
+  for (let p = 0; p < n; p++) {
+    for (let q = 0; q < n; q++) {
+      let twoElectron = 0;
+      for (let k = 0; k < nOccupied; k++) twoElectron += 2 * eri[eriIndex(p, q, k, k)] - eri[eriIndex(p, k, k, q)];
+      h[p * n + q] = (p === q ? orbitalEnergies[p] : 0) - twoElectron;
+    }
+  }
+  return { nOrbitals: n, coreEnergy: 2 + rand(), h, eri };
+}
