@@ -1,16 +1,6 @@
 'use client';
 import type { LiveEstimate } from './useLiveEstimate';
-
-function formatBytesShort(bytes: number): string {
-  const units = ['B', 'KiB', 'MiB', 'GiB', 'TiB'];
-  let value = bytes;
-  let unit = 0;
-  while (value >= 1024 && unit < units.length - 1) {
-    value /= 1024;
-    unit++;
-  }
-  return `${value.toFixed(unit === 0 ? 0 : 1)} ${units[unit]}`;
-}
+import { formatBytes } from '../../solver/run/formatBytes';
 
 /** The size of the run as the worker counts it; over the budget it says why Run is off. */
 export function EstimatePanel({ state }: { state: LiveEstimate }) {
@@ -30,8 +20,8 @@ export function EstimatePanel({ state }: { state: LiveEstimate }) {
               {state.estimate.determinants.toLocaleString('en-US')}
             </span>{' '}
             determinant{state.estimate.determinants === 1 ? '' : 's'} over {state.estimate.activeOrbitals} active of {state.estimate.orbitals} orbitals, about{' '}
-            <span className="font-semibold" data-testid="estimate-memory">{formatBytesShort(state.estimate.bytes)}</span> of the{' '}
-            {formatBytesShort(state.estimate.budgetBytes)} budget.
+            <span className="font-semibold" data-testid="estimate-memory">{formatBytes(state.estimate.bytes)}</span> of the{' '}
+            {formatBytes(state.estimate.budgetBytes)} budget.
           </p>
         ) : (
           <div className="rounded-md border-l-4 border-caution-500 bg-caution-50 px-3 py-2 text-caution-700" data-testid="estimate-refusal" role="alert">

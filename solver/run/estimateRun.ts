@@ -5,6 +5,7 @@ import { SolverError } from '../errors';
 import { prepareSystem } from './prepareSystem';
 import { planCi } from './ciStage';
 import type { RunEstimate } from './result';
+import { formatBytes } from './formatBytes';
 
 /**
  * The size of a run before anything large is allocated: determinant count and memory,
@@ -49,15 +50,4 @@ export function estimateRun(runFile: RunFile): RunEstimate {
     activeOrbitals: spec.nOrbitals,
     message,
   };
-}
-
-export function formatBytes(bytes: number): string {
-  const units = ['B', 'KiB', 'MiB', 'GiB', 'TiB'];
-  let value = bytes;
-  let unit = 0;
-  while (value >= 1024 && unit < units.length - 1) {
-    value /= 1024;
-    unit++;
-  }
-  return `${value.toFixed(unit === 0 ? 0 : 1)} ${units[unit]}`;
 }
