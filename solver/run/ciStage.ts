@@ -13,7 +13,7 @@ import {
   spinCompleteWarning,
   type CiSpaceSpec,
 } from '../ci';
-import { irrepLabel, irrepIndex } from '../symmetry';
+import { irrepLabel, irrepIndex, rootIrrep } from '../symmetry';
 import { badInput } from '../errors';
 import { selectOrbitals, maxExcitationOf, type OrbitalSelection } from './orbitalSelection';
 import type { RootResult, RunResult } from './result';
@@ -134,12 +134,7 @@ export function runCiStage(input: CiStageInput): NonNullable<RunResult['ci']> & 
     let irrep: string | null = null;
     if (activeIrreps && input.pointGroup && leading.length > 0) {
       // A root of a symmetry-adapted space has the irrep of each of its determinants.
-      let x = 0;
-      for (let p = 0; p < spec.nOrbitals; p++) {
-        if (leading[0].alpha[p] === '1') x ^= activeIrreps[p];
-        if (leading[0].beta[p] === '1') x ^= activeIrreps[p];
-      }
-      irrep = irrepLabel(input.pointGroup, x);
+      irrep = irrepLabel(input.pointGroup, rootIrrep(activeIrreps, leading[0]));
     }
     return {
       energy,

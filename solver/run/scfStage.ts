@@ -129,9 +129,16 @@ export function moleculeScf(prepared: PreparedMolecule, runFile: RunFile, { onPr
   let orbitalIrrepLabels: string[] | null = null;
   if (prepared.symmetry && reference !== 'UHF') {
     const labelled = orbitalIrreps(basis, prepared.symmetry, coefficients, overlap, n, scf.orbitalEnergies.alpha);
-    irreps = labelled.irreps;
-    orbitalIrrepLabels = labelled.labels;
     coefficients = labelled.coefficients ?? coefficients;
+    if (labelled.impureOrbitals.length > 0) {
+      // Orbitals that mix irreps (a symmetry-broken SCF) cannot label roots or restrict the CI.
+      warnings.push(
+        `SCF orbitals ${labelled.impureOrbitals.join(', ')} do not belong to one irrep of ${prepared.pointGroup}: the SCF broke the molecule's symmetry, so orbital and root labels are left out`,
+      );
+    } else {
+      irreps = labelled.irreps;
+      orbitalIrrepLabels = labelled.labels;
+    }
   } else if (prepared.symmetry) {
     // UHF orbitals of a symmetry-broken solution need not carry irreps; label only when pure.
     orbitalIrrepLabels = null;

@@ -1,24 +1,10 @@
 import type { BasisSet } from '../types';
 import { SolverError } from '../errors';
 import { monomialSign, type SymmetryOperation } from './operations';
+import { cartesianExponents } from '../basis/cartesian';
 
-/**
- * The Cartesian components of a shell of angular momentum l, in Ketbook's order
- * (p: x, y, z; d: xx, xy, xz, yy, yz, zz): lx from l down to 0, then ly from l − lx down to 0.
- * Returned as (lx, ly, lz) triples packed in one array.
- */
-export function cartesianComponents(l: number): Int32Array {
-  const out = new Int32Array(((l + 1) * (l + 2) * 3) / 2);
-  let k = 0;
-  for (let lx = l; lx >= 0; lx--) {
-    for (let ly = l - lx; ly >= 0; ly--) {
-      out[k++] = lx;
-      out[k++] = ly;
-      out[k++] = l - lx - ly;
-    }
-  }
-  return out;
-}
+/** The basis module's component order is the one order; symmetry reuses it. */
+export { cartesianExponents as cartesianComponents };
 
 function sameContraction(a: BasisSet['shells'][number], b: BasisSet['shells'][number]): boolean {
   if (a.l !== b.l || a.exponents.length !== b.exponents.length) return false;
@@ -58,7 +44,7 @@ export function basisFunctionOperation(
         `the basis is not symmetric under ${op.symbol}: shell ${shell.label} of atom ${shell.atomIndex + 1} has no matching image`,
       );
     }
-    const components = cartesianComponents(shell.l);
+    const components = cartesianExponents(shell.l);
     const nComponents = components.length / 3;
     const from = basis.shellOffsets[s];
     const to = basis.shellOffsets[t];
