@@ -44,6 +44,10 @@ export interface DavidsonOptions {
   maxSubspace: number;
   /** Correction vector formula (default 'olsen'). */
   correction?: DavidsonCorrection;
+  /** Projector onto the invariant subspace being searched (applied to every new vector before orthogonalisation). */
+  project?: (v: Float64Array) => void;
+  /** Dimension of that subspace (default N): the search ends when V spans it. */
+  dimension?: number;
   onIteration?: (record: DavidsonIteration) => void;
   shouldCancel?: () => boolean;
 }
@@ -99,8 +103,9 @@ export function davidson(
 ): DavidsonResult {
   const N = diagonal.length;
   const k = options.roots;
-  const maxSubspace = Math.min(N, Math.max(options.maxSubspace, 2 * k));
-  const capacity = Math.min(N, Math.max(maxSubspace, guesses.length));
+  const dimension = Math.min(N, options.dimension ?? N);
+  const maxSubspace = Math.min(dimension, Math.max(options.maxSubspace, 2 * k));
+  const capacity = Math.min(dimension, Math.max(maxSubspace, guesses.length));
   const useOlsen = (options.correction ?? 'olsen') === 'olsen';
   const V = new Float64Array(capacity * N);
   const AV = new Float64Array(capacity * N);
@@ -117,6 +122,7 @@ export function davidson(
   const appendCandidate = (): boolean => {
     const count = m + pending;
     if (count >= capacity) return false;
+    options.project?.(candidate);
     let norm = Math.sqrt(dotAt(candidate, 0, candidate, 0, N));
     if (!(norm > 0)) return false;
     for (let t = 0; t < N; t++) candidate[t] /= norm;
@@ -195,7 +201,7 @@ export function davidson(
       if (!small) needsCorrection.push(r);
     }
     previous.set(theta);
-    if (allConverged || m >= N) {
+    if (allConverged || m >= dimension) {
       return { energies: Array.from(theta), vectors: ritzX.map((x) => Float64Array.from(x)), history, matrixProducts: products };
     }
     if (m + needsCorrection.length > maxSubspace) {

@@ -4,7 +4,8 @@
  *
  * Single replacements (diagonal p = q included): for every ordered pair of string
  * classes (source → target), ⟨I|E_pq|J⟩ = sign for target string I, source string J.
- * Two views of the same list: incoming per target string (CSR: start/source/pair/sign) and
+ * Two views of the same list: incoming per target string (CSR: start/source/pair/sign, each
+ * target's entries in ascending pair order, which the symmetric sigma build relies on) and
  * grouped by orbital pair (pairStart/pairSource/pairTarget/pairSign).
  *
  * Same-spin replacements: every pair of strings I ≠ J in the set differing by one or two
@@ -91,6 +92,7 @@ function buildSingles(strings: SpinStrings, n: number): SingleReplacementBlock[]
       pair[slot] = list.pair[e];
       sign[slot] = list.sign[e];
     }
+    sortRowsByPair(start, source, pair, sign, nTarget);
     const pairStart = countingSortStarts(list.pair, n * n);
     const pairSource = new Int32Array(m);
     const pairTarget = new Int32Array(m);
@@ -105,6 +107,27 @@ function buildSingles(strings: SpinStrings, n: number): SingleReplacementBlock[]
     blocks.push({ sourceClass, targetClass, start, source, pair, sign, pairStart, pairSource, pairTarget, pairSign });
   }
   return blocks;
+}
+
+/** Orders each target's incoming entries by ascending pair code (insertion sort; rows are short). */
+function sortRowsByPair(start: Int32Array, source: Int32Array, pair: Int32Array, sign: Float64Array, rows: number): void {
+  for (let row = 0; row < rows; row++) {
+    for (let e = start[row] + 1; e < start[row + 1]; e++) {
+      const p = pair[e];
+      const so = source[e];
+      const si = sign[e];
+      let f = e - 1;
+      while (f >= start[row] && pair[f] > p) {
+        pair[f + 1] = pair[f];
+        source[f + 1] = source[f];
+        sign[f + 1] = sign[f];
+        f--;
+      }
+      pair[f + 1] = p;
+      source[f + 1] = so;
+      sign[f + 1] = si;
+    }
+  }
 }
 
 /** CSR start offsets (length buckets+1) for the given bucket of each entry. */

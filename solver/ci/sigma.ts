@@ -20,6 +20,7 @@ import { badInput } from '../errors';
 import type { OrbitalHamiltonian } from '../types';
 import { sigmaPlan, SigmaPlan } from './sigmaPlan';
 import { blockIndexOf, CiSpace } from './space';
+import { addTransposed, transposePermutation, TransposeParity } from './transposeSymmetry';
 
 function checkLengths(space: CiSpace, ...vectors: Float64Array[]): void {
   for (const v of vectors) {
@@ -27,18 +28,40 @@ function checkLengths(space: CiSpace, ...vectors: Float64Array[]): void {
   }
 }
 
-export function sigma(ham: OrbitalHamiltonian, space: CiSpace, c: Float64Array, out: Float64Array): void {
+export interface SigmaOptions {
+  /**
+   * The input obeys T c = parity·c (see transposeSymmetry.ts); the build then uses the
+   * Ms = 0 transpose symmetry. With W = ½E_core + D_α + H_αα + Σ_{pq>rs}(pq|rs)E^α_pq E^β_rs
+   * + ½Σ_{pq}(pq|pq)E^α_pq E^β_pq (pair codes compared), T H_αα T = H_ββ and
+   * (pq|rs) = (rs|pq) give H c = W c + parity·T(W c): no beta–beta part and half the
+   * alpha–beta work. Throws when the space has no transpose symmetry. The result for an
+   * input of mixed parity is meaningless.
+   */
+  transposeParity?: TransposeParity;
+}
+
+export function sigma(ham: OrbitalHamiltonian, space: CiSpace, c: Float64Array, out: Float64Array, options: SigmaOptions = {}): void {
   checkLengths(space, c, out);
   if (c === out) throw badInput('sigma needs distinct input and output vectors');
   const plan = sigmaPlan(ham, space);
-  sigmaDiagonalPart(ham.coreEnergy, plan, space, c, out);
+  const parity = options.transposeParity;
+  if (parity !== undefined) {
+    const perm = transposePermutation(space);
+    if (!perm) throw badInput('this CI space has no alpha–beta transpose symmetry (it needs nα = nβ and a symmetric space)');
+    sigmaDiagonalPart(0.5 * ham.coreEnergy, plan, space, c, out, false);
+    sigmaAlphaAlpha(plan, space, c, out);
+    sigmaAlphaBeta(plan, space, c, out, true);
+    addTransposed(perm, out, parity);
+    return;
+  }
+  sigmaDiagonalPart(ham.coreEnergy, plan, space, c, out, true);
   sigmaAlphaAlpha(plan, space, c, out);
   sigmaBetaBeta(plan, space, c, out);
-  sigmaAlphaBeta(plan, space, c, out);
+  sigmaAlphaBeta(plan, space, c, out, false);
 }
 
-/** Core energy plus each string's same-spin diagonal energy. */
-function sigmaDiagonalPart(coreEnergy: number, plan: SigmaPlan, space: CiSpace, c: Float64Array, out: Float64Array): void {
+/** Core energy plus each string's same-spin diagonal energy (beta strings' only when withBeta). */
+function sigmaDiagonalPart(coreEnergy: number, plan: SigmaPlan, space: CiSpace, c: Float64Array, out: Float64Array, withBeta: boolean): void {
   const alphaClasses = space.alpha.classes;
   const betaClasses = space.beta.classes;
   for (const block of space.blocks) {
@@ -48,7 +71,8 @@ function sigmaDiagonalPart(coreEnergy: number, plan: SigmaPlan, space: CiSpace, 
     for (let ia = 0; ia < block.alphaCount; ia++) {
       const ea = coreEnergy + plan.alpha.diagonal[aStart + ia];
       const row = block.offset + ia * nB;
-      for (let ib = 0; ib < nB; ib++) out[row + ib] = (ea + plan.beta.diagonal[bStart + ib]) * c[row + ib];
+      if (withBeta) for (let ib = 0; ib < nB; ib++) out[row + ib] = (ea + plan.beta.diagonal[bStart + ib]) * c[row + ib];
+      else for (let ib = 0; ib < nB; ib++) out[row + ib] = ea * c[row + ib];
     }
   }
 }
@@ -116,7 +140,7 @@ function sigmaBetaBeta(plan: SigmaPlan, space: CiSpace, c: Float64Array, out: Fl
  * rows of a dense gathered matrix; the beta operator M_pq = Σ_rs (pq|rs) E^β_rs acts on it
  * as a sparse matrix, with the contiguous inner loop running over the gathered rows.
  */
-function sigmaAlphaBeta(plan: SigmaPlan, space: CiSpace, c: Float64Array, out: Float64Array): void {
+function sigmaAlphaBeta(plan: SigmaPlan, space: CiSpace, c: Float64Array, out: Float64Array, lowerTriangle: boolean): void {
   const { n, eri4 } = plan;
   const n2 = n * n;
   const betaClasses = space.beta.classes;
@@ -148,8 +172,15 @@ function sigmaAlphaBeta(plan: SigmaPlan, space: CiSpace, c: Float64Array, out: F
         result.fill(0, 0, nE * nBI);
         for (let ib = 0; ib < nBI; ib++) {
           const rCol = ib * nE;
-          for (let k = bStart[ib]; k < bStart[ib + 1]; k++) {
-            const w = bSign[k] * eri4[base + bPair[k]];
+          const kEnd = bStart[ib + 1];
+          for (let k = bStart[ib]; k < kEnd; k++) {
+            const rs = bPair[k];
+            let w = bSign[k] * eri4[base + rs];
+            if (lowerTriangle && rs >= pq) {
+              // rows are sorted by pair: rs = pq counts half, larger rs come from the transpose
+              if (rs > pq) break;
+              w *= 0.5;
+            }
             if (w === 0) continue;
             const gCol = bSource[k] * nE;
             axpy(result, rCol, w, gathered, gCol, nE);
