@@ -5,9 +5,12 @@
  * determinants = Σ over allowed blocks of count_α·count_β.
  *
  * The memory model (bytes) is an upper estimate of what solveCi allocates:
- *   Davidson vectors  (2·M + 2·k + 3)·N·8        M = max subspace, k = roots, N = determinants:
- *                                                 subspace and its sigma vectors, Ritz vectors and
- *                                                 their sigmas, diagonal and two work vectors;
+ *   Davidson vectors  (2·M + 5·k + 7)·N·8        M = max subspace, k = roots, N = determinants:
+ *                                                 the flat V and AV stores (2·M), Ritz vectors and
+ *                                                 residuals (2·k), start vectors (k + 2), returned
+ *                                                 and normalised vectors (2·k), diagonal, one
+ *                                                 candidate, two transposed sigma work vectors and
+ *                                                 the transpose permutation (Int32, ≤ 1);
  *                     or 3·N²·8 when N ≤ the dense limit (matrix, eigenvectors, work);
  *   string tables     (56 + 4·n_σ) bytes per string;
  *   single lists      32 bytes × n_σ(n − n_σ + 1) per string (two views, diagonal included);
@@ -102,7 +105,7 @@ export function estimateCiSpace(spec: CiSpaceSpec, options: { orbitalIrreps?: In
   const roots = options.roots ?? 1;
   const subspace = Math.min(defaultMaxSubspace(roots), Math.max(determinants, 1));
   const vectorBytes =
-    determinants <= DENSE_LIMIT_DETERMINANTS ? 3 * determinants * determinants * 8 : (2 * subspace + 2 * roots + 3) * determinants * 8;
+    determinants <= DENSE_LIMIT_DETERMINANTS ? 3 * determinants * determinants * 8 : (2 * subspace + 5 * roots + 7) * determinants * 8;
   const spinTables = (strings: number, ne: number): number => {
     const singles = ne * (n - ne + 1);
     const sameSpin = Math.min(strings, ne * (n - ne) + binomial(ne, 2) * binomial(n - ne, 2));

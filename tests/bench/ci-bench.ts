@@ -1,11 +1,15 @@
 /**
  * Timing script for the CI engine (not a test): full-CI sigma builds and complete
  * Davidson solves for 10 and 12 orbitals at half filling (63,504 and 853,776 determinants),
- * on the Hubbard ring (sparse integrals) and on a seeded random Hamiltonian (every
- * integral non-zero, the cost of a molecule).
+ * on the Hubbard ring (sparse integrals), on a seeded random Hamiltonian (every integral
+ * non-zero) and on the molecule-like Hamiltonian (diagonally dominant, canonical-HF-like
+ * orbitals: the convergence of a molecule). Sigma builds are timed plain and with the
+ * Ms = 0 transpose symmetry; solves without a target spin (whole space) and as singlets
+ * (one transpose sector). Solve times are wall times including setup (space, plan).
  *
  *   npx tsx tests/bench/ci-bench.ts            all cases
  *   npx tsx tests/bench/ci-bench.ts --quick    skips the 12-orbital Davidson solves
+ *   npx tsx tests/bench/ci-bench.ts --molecule only the molecule-like Hamiltonian
  */
 import { buildCiSpace } from '../../solver/ci/space';
 import { sigma } from '../../solver/ci/sigma';
@@ -13,9 +17,11 @@ import { sigmaPlan } from '../../solver/ci/sigmaPlan';
 import { solveCi } from '../../solver/ci/solveCi';
 import { hubbardHamiltonian } from '../../solver/system/hubbard';
 import type { OrbitalHamiltonian } from '../../solver/types';
-import { randomHamiltonian } from '../solver/ci/hamiltonians';
+import { projectOntoParity, transposePermutation } from '../../solver/ci/transposeSymmetry';
+import { moleculeLikeHamiltonian, randomHamiltonian } from '../solver/ci/hamiltonians';
 
 const quick = process.argv.includes('--quick');
+const moleculeOnly = process.argv.includes('--molecule');
 let peakRss = 0;
 const samplePeak = (): void => {
   peakRss = Math.max(peakRss, process.memoryUsage().rss);
@@ -44,26 +50,33 @@ function benchSigma(label: string, ham: OrbitalHamiltonian, sites: number): void
   const N = space.determinantCount;
   const c = new Float64Array(N);
   for (let i = 0; i < N; i++) c[i] = Math.sin(i + 1);
+  projectOntoParity(transposePermutation(space)!, c, 1); // a singlet-parity vector, valid for both builds
   const out = new Float64Array(N);
-  sigma(ham, space, c, out); // warm-up
-  samplePeak();
   const repeats = N > 200000 ? 2 : 10;
-  t = performance.now();
-  for (let r = 0; r < repeats; r++) sigma(ham, space, c, out);
-  const perSigma = seconds(t) / repeats;
-  samplePeak();
+  const time = (parity?: 1): number => {
+    sigma(ham, space, c, out, { transposeParity: parity }); // warm-up
+    samplePeak();
+    const start = performance.now();
+    for (let r = 0; r < repeats; r++) sigma(ham, space, c, out, { transposeParity: parity });
+    samplePeak();
+    return seconds(start) / repeats;
+  };
+  const perSigma = time();
+  const perSymmetricSigma = time(1);
   const madds = alphaBetaMultiplyAdds(ham, space);
   console.log(
     `${label}: ${N.toLocaleString('en-US')} determinants, setup ${setup.toFixed(3)} s, sigma ${perSigma.toFixed(4)} s ` +
-      `(${(1 / perSigma).toFixed(2)} sigma builds/s), alpha–beta multiply-adds ${madds.toExponential(3)}, ` +
-      `${((perSigma * 1e9) / madds).toFixed(2)} ns per multiply-add (whole sigma time / alpha–beta count)`,
+      `(${(1 / perSigma).toFixed(2)} sigma builds/s), transpose-symmetric sigma ${perSymmetricSigma.toFixed(4)} s, ` +
+      `alpha–beta multiply-adds ${madds.toExponential(3)}, ` +
+      `${((perSigma * 1e9) / madds).toFixed(2)} ns per multiply-add (whole plain sigma time / alpha–beta count)`,
   );
 }
 
-function benchSolve(label: string, ham: OrbitalHamiltonian, sites: number): void {
+function benchSolve(label: string, ham: OrbitalHamiltonian, sites: number, targetMultiplicity?: number): void {
   const spec = { nOrbitals: sites, nAlpha: sites / 2, nBeta: sites / 2, maxExcitation: null };
   const t = performance.now();
-  const sol = solveCi(ham, spec, { method: 'davidson', onProgress: samplePeak });
+  const sol = solveCi(ham, spec, { method: 'davidson', targetMultiplicity, onProgress: samplePeak });
+  label += targetMultiplicity === undefined ? ', any spin' : `, multiplicity ${targetMultiplicity}`;
   const wall = seconds(t);
   samplePeak();
   const last = sol.iterations[sol.iterations.length - 1];
@@ -74,13 +87,17 @@ function benchSolve(label: string, ham: OrbitalHamiltonian, sites: number): void
 }
 
 for (const sites of [10, 12]) {
-  const hubbard = hubbardHamiltonian({ sites, periodic: true, t: 1, U: 4 });
-  const random = randomHamiltonian(sites, 2024);
-  benchSigma(`H${sites}-like Hubbard ring U=4`, hubbard, sites);
-  benchSigma(`H${sites}-like random Hamiltonian`, random, sites);
+  const cases: [string, OrbitalHamiltonian][] = [[`H${sites}-like molecule-like Hamiltonian`, moleculeLikeHamiltonian(sites, 2024)]];
+  if (!moleculeOnly) {
+    cases.push([`H${sites}-like Hubbard ring U=4`, hubbardHamiltonian({ sites, periodic: true, t: 1, U: 4 })]);
+    cases.push([`H${sites}-like random Hamiltonian`, randomHamiltonian(sites, 2024)]);
+  }
+  for (const [label, ham] of cases) benchSigma(label, ham, sites);
   if (sites === 10 || !quick) {
-    benchSolve(`H${sites}-like Hubbard ring U=4`, hubbard, sites);
-    benchSolve(`H${sites}-like random Hamiltonian`, random, sites);
+    for (const [label, ham] of cases) {
+      benchSolve(label, ham, sites, 1);
+      benchSolve(label, ham, sites);
+    }
   }
 }
 console.log(`peak resident memory ${(peakRss / 2 ** 20).toFixed(0)} MiB`);
