@@ -235,7 +235,8 @@ export function davidson(
         appendCandidate(); // fallback when the preconditioned vector lies in the span
       }
     }
-    if (pending === 0) {
+    // With every residual already small, the next iteration only confirms the energies.
+    if (pending === 0 && needsCorrection.length > 0) {
       throw new SolverError('not-converged', 'Davidson found no new direction to add (the subspace stopped growing)', { details: history });
     }
   }

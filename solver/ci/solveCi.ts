@@ -28,7 +28,8 @@ import { denseHamiltonian } from './denseHamiltonian';
 import { spinSquared } from './densities';
 import { checkBudget, estimateCiSpace } from './estimate';
 import { hamiltonianDiagonal, sigma } from './sigma';
-import { buildCiSpace, CiSpace, determinantIndex, determinantStrings } from './space';
+import { buildCiSpace, CiSpace, determinantIndex, determinantPatterns, determinantStrings } from './space';
+import { slaterCondonElement } from './slaterCondon';
 import type { CiSpaceSpec } from './spaceSpec';
 import { parityOfMultiplicity, projectOntoParity, sectorDimension, TransposeParity, transposePermutation } from './transposeSymmetry';
 
@@ -129,6 +130,73 @@ function initialGuesses(space: CiSpace, diagonal: Float64Array, count: number, p
   return guesses;
 }
 
+/**
+ * Start vectors from a small full diagonalisation: H in the space of the lowest-diagonal
+ * determinants (with their spin-flipped partners, so spin stays pure) is solved densely and
+ * its lowest eigenvectors seed Davidson. Unit vectors on the lowest diagonals alone can miss
+ * a root whose spatial or spin symmetry none of them carries — the sigma build conserves
+ * symmetry, so such a root would never appear. Common practice (no source) for Davidson guesses.
+ */
+function subspaceGuesses(
+  ham: OrbitalHamiltonian,
+  space: CiSpace,
+  diagonal: Float64Array,
+  count: number,
+  project?: (v: Float64Array) => void,
+): Float64Array[] {
+  const N = diagonal.length;
+  const size = Math.min(N, Math.max(64, 8 * count), 240);
+  if (size <= count) return initialGuesses(space, diagonal, count, project);
+  const order = Array.from({ length: N }, (_, i) => i).sort((a, b) => diagonal[a] - diagonal[b] || a - b);
+  const chosen: number[] = [];
+  const inSet = new Set<number>();
+  const take = (i: number) => {
+    if (!inSet.has(i)) {
+      inSet.add(i);
+      chosen.push(i);
+    }
+  };
+  for (const i of order) {
+    if (chosen.length >= size) break;
+    take(i);
+    if (space.nAlpha === space.nBeta) {
+      const { alphaString, betaString } = determinantStrings(space, i);
+      const a = space.beta.lookup.get(space.alpha.patterns[alphaString]);
+      const b = space.alpha.lookup.get(space.beta.patterns[betaString]);
+      if (a !== undefined && b !== undefined) {
+        const j = determinantIndex(space, b, a);
+        if (j >= 0) take(j);
+      }
+    }
+  }
+  const m = chosen.length;
+  const patterns = chosen.map((i) => determinantPatterns(space, i));
+  const rows: number[][] = Array.from({ length: m }, () => new Array<number>(m).fill(0));
+  for (let r = 0; r < m; r++) {
+    for (let c = 0; c <= r; c++) {
+      const value = r === c ? diagonal[chosen[r]] : slaterCondonElement(ham, patterns[r], patterns[c]).value;
+      rows[r][c] = value;
+      rows[c][r] = value;
+    }
+  }
+  const eig = new EigenvalueDecomposition(new Matrix(rows), { assumeSymmetric: true });
+  const values = eig.realEigenvalues;
+  const V = eig.eigenvectorMatrix;
+  const byEnergy = values.map((_, k) => k).sort((a, b) => values[a] - values[b]);
+  const guesses: Float64Array[] = [];
+  for (const k of byEnergy) {
+    if (guesses.length >= count) break;
+    const v = new Float64Array(N);
+    for (let r = 0; r < m; r++) v[chosen[r]] = V.get(r, k);
+    if (project) {
+      project(v);
+      if (!v.some((x) => Math.abs(x) > 1e-12)) continue;
+    }
+    guesses.push(v);
+  }
+  return guesses.length > 0 ? guesses : initialGuesses(space, diagonal, count, project);
+}
+
 function denseSolve(ham: OrbitalHamiltonian, space: CiSpace): { energies: number[]; vectors: Float64Array[] } {
   const N = space.determinantCount;
   const H = denseHamiltonian(ham, space);
@@ -192,12 +260,16 @@ export function solveCi(ham: OrbitalHamiltonian, spec: CiSpaceSpec, options: Sol
     for (const parity of sectors) {
       const dimension = perm && parity !== undefined ? sectorDimension(perm, parity) : N;
       const project = perm && parity !== undefined ? (v: Float64Array) => projectOntoParity(perm, v, parity) : undefined;
-      let tracked = Math.min(dimension, roots);
+      // Two Ritz pairs beyond the roots asked for: converging only the requested number can
+      // stop on a higher eigenvalue while a lower root of another character has not yet
+      // entered the subspace (common practice, no source).
+      const buffer = roots > 1 ? 2 : 0;
+      let tracked = Math.min(dimension, roots + buffer);
       if (tracked === 0) continue;
       let previousVectors: Float64Array[] = [];
       let sectorFound: typeof found = [];
       for (;;) {
-        const guesses = [...previousVectors, ...initialGuesses(space, diagonal, tracked + 2, project)];
+        const guesses = [...previousVectors, ...subspaceGuesses(ham, space, diagonal, tracked + 2, project)];
         const result = davidson((x, out) => sigma(ham, space, x, out, { transposeParity: parity }), diagonal, guesses, {
           roots: tracked,
           maxIterations: options.maxIterations ?? 200,

@@ -121,6 +121,19 @@ describe('facts of the trade through the pipeline', () => {
   });
 });
 
+describe('several roots of a symmetric molecule', () => {
+  it('Davidson finds the same lowest roots as the dense solver, whatever their spin and irrep', async () => {
+    const chain: Atoms = Array.from({ length: 6 }, (_, i) => ['H', 0, 0, 1.8 * i] as [string, number, number, number]);
+    const dense = await run(molecule(chain, { ci: { space: 'FCI', roots: 4, method: 'dense' } }));
+    const davidson = await run(molecule(chain, { ci: { space: 'FCI', roots: 4, method: 'davidson' } }));
+    // The dense eigensolver is the oracle for the iterative one (common practice, no source).
+    for (let k = 0; k < 4; k++) {
+      expect(Math.abs(davidson.energies.roots[k] - dense.energies.roots[k])).toBeLessThan(1e-9);
+      expect(Math.abs(davidson.s2[k] - dense.s2[k])).toBeLessThan(1e-6);
+    }
+  });
+});
+
 describe('refusals', () => {
   it('refuses a space above the memory budget before allocating it', async () => {
     const chain: Atoms = Array.from({ length: 12 }, (_, i) => ['H', 0, 0, 1.8 * i] as [string, number, number, number]);
