@@ -1,6 +1,6 @@
 'use client';
 import type { LiveEstimate } from './useLiveEstimate';
-import { formatBytes } from '../../solver/run/formatBytes';
+import { formatBytes } from '../../solver/formatBytes';
 
 /** The size of the run as the worker counts it; over the budget it says why Run is off. */
 export function EstimatePanel({ state }: { state: LiveEstimate }) {

@@ -17,6 +17,7 @@
  *   same-spin lists   36 bytes × min(strings, n_σ(n−n_σ) + C(n_σ,2)·C(n−n_σ,2)) per string;
  *   integrals         n⁴·8 (the unpacked (pq|rs) table the sigma build reads).
  */
+import { formatBytes } from '../formatBytes';
 import { SolverError } from '../errors';
 import { blockAllowed, CiSpaceSpec, classKeyCode, spinOrbitalRoles, SpinOrbitalRoles, StringClassKey, validateSpec } from './spaceSpec';
 import { DENSE_LIMIT_DETERMINANTS, defaultMaxSubspace } from './davidsonSettings';
@@ -120,16 +121,6 @@ function formatCount(x: number): string {
   return x.toExponential(3);
 }
 
-function formatBytes(bytes: number): string {
-  const units = ['bytes', 'KiB', 'MiB', 'GiB', 'TiB', 'PiB'];
-  let value = bytes;
-  let unit = 0;
-  while (value >= 1024 && unit < units.length - 1) {
-    value /= 1024;
-    unit++;
-  }
-  return unit === units.length - 1 && value >= 1024 ? `${bytes.toExponential(2)} bytes` : `${value.toFixed(value < 10 ? 2 : 1)} ${units[unit]}`;
-}
 
 /** Refuses a space whose estimated memory exceeds the budget (default 1 GiB). */
 export function checkBudget(estimate: CiSpaceEstimate, budgetBytes: number = 2 ** 30): void {

@@ -5,7 +5,7 @@ import { SolverError } from '../errors';
 import { prepareSystem } from './prepareSystem';
 import { planCi } from './ciStage';
 import type { RunEstimate } from './result';
-import { formatBytes } from './formatBytes';
+import { formatBytes } from '../formatBytes';
 
 /**
  * The size of a run before anything large is allocated: determinant count and memory,
