@@ -8,9 +8,11 @@
 import { readFileSync } from 'node:fs';
 import { SolverError } from '../solver/errors';
 import { parseRunFile } from '../solver/runFile/parse';
+import { toJsonSafe } from '../solver/runFile/jsonSafety';
 import { runCalculation, estimateRun } from '../solver/run';
 import type { ProgressEvent } from '../solver/types';
 
+const KNOWN_FLAGS = new Set(['--estimate', '--quiet']);
 const EXIT_CODES: Record<string, number> = { 'bad-input': 2, 'over-budget': 3, 'not-converged': 4 };
 
 function describeProgress(event: ProgressEvent): string {
@@ -38,6 +40,10 @@ function printError(error: unknown): number {
 async function main(argv: string[]): Promise<number> {
   const flags = argv.filter((a) => a.startsWith('--'));
   const paths = argv.filter((a) => !a.startsWith('--'));
+  const unknownFlags = flags.filter((f) => !KNOWN_FLAGS.has(f));
+  if (unknownFlags.length > 0) {
+    return printError(new SolverError('bad-input', `unknown option ${unknownFlags.join(', ')}; known: ${[...KNOWN_FLAGS].join(', ')}`));
+  }
   if (paths.length !== 1) {
     return printError(new SolverError('bad-input', 'usage: npm run -s solve -- <run.json | -> [--estimate] [--quiet]'));
   }
@@ -56,7 +62,7 @@ async function main(argv: string[]): Promise<number> {
   try {
     const runFile = parseRunFile(json);
     if (flags.includes('--estimate')) {
-      process.stdout.write(`${JSON.stringify(estimateRun(runFile))}\n`);
+      process.stdout.write(`${JSON.stringify(toJsonSafe(estimateRun(runFile)))}\n`);
       return 0;
     }
     const quiet = flags.includes('--quiet');

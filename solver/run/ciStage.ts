@@ -75,10 +75,16 @@ export function planCi(input: Pick<CiStageInput, 'ci' | 'nOrbitals' | 'nElectron
   return { selection, spec, activeIrreps };
 }
 
-/** Whether the Langhoff–Davidson +Q correction applies: a truncated excitation space only. */
-function plusQApplies(ci: CiSettings, spec: CiSpaceSpec): boolean {
-  if (spec.maxExcitation === null || spec.maxExcitation < 2 || spec.ras) return false;
-  return spec.maxExcitation < spec.nAlpha + spec.nBeta;
+/**
+ * Whether the Langhoff–Davidson +Q correction applies: a truncated excitation space that
+ * contains the SCF reference determinant itself, without RAS or irrep filters, and below the
+ * level at which it would already be full CI.
+ */
+function plusQApplies(ci: CiSettings, spec: CiSpaceSpec, twoS: number): boolean {
+  if (spec.maxExcitation === null || spec.maxExcitation < 2 || spec.ras || spec.targetIrrep !== undefined) return false;
+  if (ci.twoMs !== undefined && ci.twoMs !== twoS) return false;
+  const highestLevel = Math.min(spec.nAlpha, spec.nOrbitals - spec.nAlpha) + Math.min(spec.nBeta, spec.nOrbitals - spec.nBeta);
+  return spec.maxExcitation < highestLevel;
 }
 
 export function runCiStage(input: CiStageInput): NonNullable<RunResult['ci']> & { plusQ: number | null; warnings: string[]; determinantCount: number; coreEnergy: number } {
@@ -155,9 +161,10 @@ export function runCiStage(input: CiStageInput): NonNullable<RunResult['ci']> & 
     };
   });
 
-  const plusQ = plusQApplies(input.ci, spec)
-    ? langhoffDavidson(e0, input.referenceEnergy, solution.referenceWeight[0])
-    : null;
+  const plusQ =
+    plusQApplies(input.ci, spec, input.twoS) && solution.referenceWeight[0] > 0
+      ? langhoffDavidson(e0, input.referenceEnergy, solution.referenceWeight[0])
+      : null;
 
   let densities: { oneParticle: number[]; twoParticle: number[] } | undefined;
   if (input.includeDensities) {

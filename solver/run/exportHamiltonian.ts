@@ -39,7 +39,7 @@ export function exportOrbitalHamiltonian(runFile: RunFile, dropBelow = 0) {
   return {
     type: 'integrals' as const,
     electrons: spec.nAlpha + spec.nBeta,
-    multiplicity: spec.nAlpha - spec.nBeta + 1,
+    multiplicity: Math.abs(spec.nAlpha - spec.nBeta) + 1,
     ...integralsFromOrbitalHamiltonian(ham, dropBelow),
   };
 }

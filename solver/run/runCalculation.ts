@@ -4,6 +4,7 @@ import type { ProgressSink } from '../types';
 import { runFileHash } from '../runFile/canonical';
 import { toJsonSafe } from '../runFile/jsonSafety';
 import { SOLVER_VERSION } from '../version';
+import { badInput } from '../errors';
 import { slaterCondonElement } from '../ci';
 import { lowestOrbitalsPattern } from '../ci/bits';
 import { prepareSystem } from './prepareSystem';
@@ -73,6 +74,17 @@ export async function runCalculation(runFile: RunFile, options: RunOptions = {})
   let coreEnergy = coreEnergyOfSystem;
 
   if (runFile.ci) {
+    if (reference && reference.scf.reference === 'UHF') {
+      throw badInput(
+        'following the RHF→UHF instability gave UHF orbitals, and CI needs RHF or ROHF orbitals: turn scf.followInstability off for a CI run',
+        'scf.followInstability',
+      );
+    }
+    if (runFile.ci.twoMs !== undefined && runFile.ci.twoMs !== prepared.twoS) {
+      warnings.push(
+        `the CI space has 2Ms = ${runFile.ci.twoMs} while the reference has 2S = ${prepared.twoS}: correlation energies are measured from a reference of a different spin`,
+      );
+    }
     const stage = runCiStage({
       ci: runFile.ci,
       coreHamiltonian: reference ? reference.problem.coreHamiltonian : (prepared as Extract<typeof prepared, { kind: 'model' }>).hamiltonian.h,

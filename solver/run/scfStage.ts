@@ -127,7 +127,7 @@ export function moleculeScf(prepared: PreparedMolecule, runFile: RunFile, { onPr
   let irreps: Int32Array | null = null;
   let coefficients = scf.coefficients.alpha;
   let orbitalIrrepLabels: string[] | null = null;
-  if (prepared.symmetry && reference !== 'UHF') {
+  if (prepared.symmetry && scf.reference !== 'UHF') {
     const labelled = orbitalIrreps(basis, prepared.symmetry, coefficients, overlap, n, scf.orbitalEnergies.alpha);
     coefficients = labelled.coefficients ?? coefficients;
     if (labelled.impureOrbitals.length > 0) {

@@ -15,7 +15,8 @@ export const RESULT_FORMAT = 'ketbook-result/1';
 export const DEFAULT_BUDGET_BYTES = 2 ** 30;
 
 const finite = z.number().refine(Number.isFinite, 'must be a finite number');
-const count = (max: number) => z.number().int('must be a whole number').min(0).max(max);
+const count = (max: number, requiredMessage?: string) =>
+  z.number({ message: requiredMessage }).int('must be a whole number').min(0).max(max);
 const orbitalIndexList = z.array(count(10_000)).max(500);
 
 const ghostMarker = z.object({ ghost: z.boolean() }).strict();
@@ -97,8 +98,8 @@ export const ciSchema = z
       .object({
         ras1: orbitalIndexList.default([]),
         ras3: orbitalIndexList.default([]),
-        maxHoles: count(100).default(0),
-        maxParticles: count(100).default(0),
+        maxHoles: count(100, 'ras needs maxHoles (0 forbids holes in ras1)'),
+        maxParticles: count(100, 'ras needs maxParticles (0 forbids electrons in ras3)'),
       })
       .strict()
       .optional(),
@@ -199,7 +200,7 @@ export const runFileSchema = z
   })
   .strict()
   .superRefine((run, ctx) => {
-    if (run.system.type === 'molecule' && run.reference === 'UHF' && run.ci) {
+    if (run.reference === 'UHF' && run.ci) {
       ctx.addIssue({
         code: 'custom',
         path: ['ci'],
