@@ -15,6 +15,9 @@
  * (√3 for dxy, dxz, dyz; 1 for dxx, dyy, dzz, and for s and p), which makes every Cartesian
  * component, d included, normalised on its own: ⟨χ|χ⟩ = 1. The d functions are then not
  * orthogonal to each other (⟨dxx|dyy⟩ = 1/3 for a single primitive) — the overlap matrix carries that.
+ * Also, under a rotation the six normalised components mix through a matrix that is not
+ * orthogonal, so the eigenvalues of S alone change when a molecule with d functions is turned;
+ * everything physical (generalised eigenvalues of H and S, energies) does not.
  */
 
 export const MAX_ANGULAR_MOMENTUM = 2;
