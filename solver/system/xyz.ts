@@ -54,7 +54,7 @@ export function parseXyz(text: string): XyzContent {
     const atomLines = lines.slice(first + 2);
     if (atomLines.length !== count) {
       throw badInput(
-        `line ${first + 1}: the count says ${count} atom${count === 1 ? '' : 's'} but ${atomLines.length} atom line${atomLines.length === 1 ? '' : 's'} follow`,
+        `line ${first + 1}: the count says ${count} atom${count === 1 ? '' : 's'} but ${atomLines.length} atom line${atomLines.length === 1 ? ' follows' : 's follow'}`,
       );
     }
     return { comment, atoms: atomLines.map((line, i) => parseAtomLine(line, first + 3 + i)) };
