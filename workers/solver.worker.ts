@@ -34,7 +34,8 @@ const api = {
   async run(runFile: unknown, onProgress?: (event: ProgressEvent) => void): Promise<WorkerOutcome<RunResult>> {
     const progress = onProgress ? throttleProgress(onProgress) : undefined;
     try {
-      const value = await runCalculation(parseRunFile(runFile), { onProgress: progress?.push });
+      // The page keeps the whole CI vectors to save them with the run; it strips them for display.
+      const value = await runCalculation(parseRunFile(runFile), { onProgress: progress?.push, includeVectors: true });
       return { ok: true, value };
     } catch (error) {
       return failure(error);

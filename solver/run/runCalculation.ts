@@ -16,6 +16,11 @@ export interface RunOptions {
   onProgress?: ProgressSink;
   /** Polled between iterations; returning true stops the run with a 'cancelled' error. */
   shouldCancel?: () => boolean;
+  /**
+   * Return the full CI vectors even when the run file does not ask for them (the browser
+   * keeps them to save with the run). Not part of the run file, so it leaves its hash alone.
+   */
+  includeVectors?: boolean;
 }
 
 function identity(n: number): Float64Array {
@@ -101,7 +106,7 @@ export async function runCalculation(runFile: RunFile, options: RunOptions = {})
       referenceEnergy,
       budgetBytes: runFile.budget?.memoryBytes ?? DEFAULT_BUDGET_BYTES,
       leadingCount: runFile.output?.leadingDeterminants ?? 20,
-      includeVectors: runFile.output?.vectors ?? false,
+      includeVectors: options.includeVectors || (runFile.output?.vectors ?? false),
       includeDensities: runFile.output?.densities ?? false,
       onProgress: options.onProgress,
       shouldCancel: options.shouldCancel,
