@@ -11,15 +11,16 @@ import { MailMessage, initMailMessage } from './mailMessage';
 import { Membership, initMembership } from './membership';
 import { PasswordReset, initPasswordReset } from './passwordReset';
 import { Project, initProject } from './project';
+import { Run, RunTag, initRun, initRunTag } from './run';
 import { SignInAttempt, initSignInAttempt } from './signInAttempt';
 import { User, initUser } from './user';
 import { Workspace, initWorkspace } from './workspace';
 
-export { AuditEntry, Invitation, MailMessage, Membership, PasswordReset, Project, SignInAttempt, User, Workspace };
+export { AuditEntry, Invitation, MailMessage, Membership, PasswordReset, Project, Run, RunTag, SignInAttempt, User, Workspace };
 export type { SiteRole } from './user';
 export type { WorkspaceRole } from './membership';
 
-const models = { AuditEntry, Invitation, MailMessage, Membership, PasswordReset, Project, SignInAttempt, User, Workspace };
+const models = { AuditEntry, Invitation, MailMessage, Membership, PasswordReset, Project, Run, RunTag, SignInAttempt, User, Workspace };
 export type Models = typeof models;
 
 let boundTo: Sequelize | null = null;
@@ -43,6 +44,13 @@ function associate(): void {
   User.hasMany(PasswordReset, { foreignKey: 'userId', as: 'passwordResets' });
   PasswordReset.belongsTo(User, { foreignKey: 'userId', as: 'user' });
 
+  Workspace.hasMany(Run, { foreignKey: 'workspaceId', as: 'runs' });
+  Run.belongsTo(Workspace, { foreignKey: 'workspaceId', as: 'workspace' });
+  Run.belongsTo(Project, { foreignKey: 'projectId', as: 'project' });
+  Run.belongsTo(User, { foreignKey: 'createdBy', as: 'creator' });
+  Run.hasMany(RunTag, { foreignKey: 'runId', as: 'tags' });
+  RunTag.belongsTo(Run, { foreignKey: 'runId', as: 'run' });
+
   AuditEntry.belongsTo(User, { foreignKey: 'actorId', as: 'actor' });
   AuditEntry.belongsTo(Workspace, { foreignKey: 'workspaceId', as: 'workspace' });
 }
@@ -58,6 +66,8 @@ export function initModels(sequelize: Sequelize): Models {
   initMailMessage(sequelize);
   initAuditEntry(sequelize);
   initSignInAttempt(sequelize);
+  initRun(sequelize);
+  initRunTag(sequelize);
   associate();
   boundTo = sequelize;
   return models;

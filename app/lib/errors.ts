@@ -18,6 +18,7 @@ export type ApiErrorCode =
   | 'not_found:invitation'
   | 'not_found:mail'
   | 'not_found:route'
+  | 'not_found:run'
   | 'conflict:email'
   | 'conflict:slug'
   | 'conflict:project-name'
@@ -27,6 +28,9 @@ export type ApiErrorCode =
   | 'payload_too_large:body'
   | 'unprocessable:token'
   | 'unprocessable:invitation-email'
+  | 'unprocessable:run-file'
+  | 'unprocessable:result-mismatch'
+  | 'unprocessable:vector'
   | 'rate_limited:sign-in'
   | 'internal:server';
 
@@ -56,6 +60,7 @@ const defaultMessages: Record<ApiErrorCode, string> = {
   'not_found:invitation': 'No such invitation.',
   'not_found:mail': 'No such message in the outbox.',
   'not_found:route': 'No such API route.',
+  'not_found:run': 'No such run in this workspace.',
   'conflict:email': 'An account with that e-mail already exists.',
   'conflict:slug': 'That workspace address is already taken.',
   'conflict:project-name': 'This workspace already has a project with that name.',
@@ -65,6 +70,9 @@ const defaultMessages: Record<ApiErrorCode, string> = {
   'payload_too_large:body': 'The request body is too large.',
   'unprocessable:token': 'This link is invalid, expired or already used.',
   'unprocessable:invitation-email': 'This invitation was sent to a different e-mail address.',
+  'unprocessable:run-file': 'The run file is not valid.',
+  'unprocessable:result-mismatch': 'The result was not computed from this run file (the run-file hash differs).',
+  'unprocessable:vector': 'The CI vector data is not valid.',
   'rate_limited:sign-in': 'Too many failed sign-in attempts. Try again later.',
   'internal:server': 'Something went wrong on the server.',
 };

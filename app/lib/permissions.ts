@@ -30,6 +30,10 @@ export const WORKSPACE_ACTIONS = [
   'project.create',
   'project.rename',
   'project.delete',
+  'run.read',
+  'run.create',
+  'run.edit',
+  'run.delete',
 ] as const;
 export type WorkspaceAction = (typeof WORKSPACE_ACTIONS)[number];
 
@@ -45,9 +49,13 @@ const workspaceLimits: Record<WorkspaceAccess, ReadonlySet<WorkspaceAction>> = {
     'project.create',
     'project.rename',
     'project.delete',
+    'run.read',
+    'run.create',
+    'run.edit',
+    'run.delete',
   ]),
-  viewer: new Set<WorkspaceAction>(['workspace.read', 'member.list', 'project.read']),
-  observer: new Set<WorkspaceAction>(['workspace.read', 'member.list', 'project.read', 'invitation.list']),
+  viewer: new Set<WorkspaceAction>(['workspace.read', 'member.list', 'project.read', 'run.read']),
+  observer: new Set<WorkspaceAction>(['workspace.read', 'member.list', 'project.read', 'invitation.list', 'run.read']),
 };
 
 const siteLimits: Record<SiteRole, ReadonlySet<SiteAction>> = {

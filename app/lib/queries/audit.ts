@@ -18,6 +18,9 @@ export type AuditAction =
   | 'project.create'
   | 'project.rename'
   | 'project.delete'
+  | 'run.create'
+  | 'run.edit'
+  | 'run.delete'
   | 'password.reset-request'
   | 'password.reset';
 

@@ -74,6 +74,14 @@ export class ApiClient {
   get(path: string) {
     return this.json('GET', path);
   }
+
+  /** A binary reply (downloads), with this client's cookie. */
+  async bytes(path: string): Promise<{ status: number; headers: Headers; bytes: Uint8Array }> {
+    const response = await fetch(`${BASE_URL}${path}`, {
+      headers: { 'x-forwarded-for': this.address, ...(this.cookie ? { cookie: this.cookie } : {}) },
+    });
+    return { status: response.status, headers: response.headers, bytes: new Uint8Array(await response.arrayBuffer()) };
+  }
   post(path: string, data?: unknown) {
     return this.json('POST', path, data ?? {});
   }
