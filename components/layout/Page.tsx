@@ -21,13 +21,3 @@ export function Section({ title, children, testId }: { title: string; children: 
 export function NarrowCard({ children }: { children: React.ReactNode }) {
   return <div className="mx-auto max-w-md rounded-xl border border-ink-soft/15 bg-white p-6 shadow-sm">{children}</div>;
 }
-
-/** An honest placeholder for parts that come later with the solver. */
-export function ComingWithSolver({ what }: { what: string }) {
-  return (
-    <div className="rounded-lg border border-dashed border-ket-500/40 bg-ket-50/50 p-4 text-sm text-ink-soft" data-testid="runs-empty">
-      <p className="font-semibold text-ink">No {what} yet.</p>
-      <p>Runs and scans arrive with the in-browser CI solver. Until then, this space stays empty — nothing here is simulated.</p>
-    </div>
-  );
-}

@@ -1,4 +1,4 @@
-import { deflateSync, inflateSync } from 'fflate';
+import { deflate, deflateSync, inflateSync } from 'fflate';
 
 /**
  * The stored form of a run's CI vectors: the roots one after another as little-endian
@@ -30,12 +30,28 @@ export interface EncodedVectors {
   bytes: Uint8Array;
 }
 
-/** `level` 0 stores without compression (deflate "stored" blocks); tests use it to reach exact sizes. */
-export function encodeVectors(vectors: ArrayLike<number>[], level: 0 | 6 | 9 = 6): EncodedVectors {
+function flatten(vectors: ArrayLike<number>[]): { flat: Float64Array; length: number } {
   const length = vectors[0]?.length ?? 0;
   if (vectors.some((v) => v.length !== length)) throw new Error('every root vector must have the same length');
   const flat = new Float64Array(vectors.length * length);
   vectors.forEach((v, k) => flat.set(v, k * length));
+  return { flat, length };
+}
+
+/**
+ * The same as encodeVectors, compressed off the page's main thread (fflate's asynchronous
+ * deflate runs in its own worker in browsers), so saving a large vector does not freeze the page.
+ */
+export function encodeVectorsAsync(vectors: ArrayLike<number>[]): Promise<EncodedVectors> {
+  const { flat, length } = flatten(vectors);
+  return new Promise((resolve, reject) => {
+    deflate(toLittleEndianBytes(flat), { level: 6 }, (error, bytes) => (error ? reject(error) : resolve({ roots: vectors.length, length, bytes })));
+  });
+}
+
+/** `level` 0 stores without compression (deflate "stored" blocks); tests use it to reach exact sizes. */
+export function encodeVectors(vectors: ArrayLike<number>[], level: 0 | 6 | 9 = 6): EncodedVectors {
+  const { flat, length } = flatten(vectors);
   return { roots: vectors.length, length, bytes: deflateSync(toLittleEndianBytes(flat), { level }) };
 }
 

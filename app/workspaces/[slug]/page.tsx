@@ -1,6 +1,7 @@
 import type { Metadata } from 'next';
 import { notFound } from 'next/navigation';
-import { ComingWithSolver, PageTitle, Section } from '@/components/layout/Page';
+import { PageTitle, Section } from '@/components/layout/Page';
+import { RunsTable } from '@/components/runs/RunsTable';
 import { InvitationList } from '@/components/workspace/InvitationList';
 import { InviteForm } from '@/components/workspace/InviteForm';
 import { MemberList } from '@/components/workspace/MemberList';
@@ -44,8 +45,8 @@ export default async function WorkspacePage({ params }: Props) {
         Your access: {access === 'observer' ? 'site admin, read only' : access}
       </p>
 
-      <Section title="Runs and scans" testId="workspace-runs">
-        <ComingWithSolver what="runs or scans" />
+      <Section title="Runs" testId="workspace-runs">
+        <RunsTable slug={slug} />
       </Section>
 
       <Section title="Projects" testId="workspace-projects">
