@@ -12,6 +12,9 @@ import {
   uniqueSuffix,
   type TestUser,
 } from './helpers';
+import { parseRunFile } from '@/solver/runFile/parse';
+import { runCalculation } from '@/solver/run';
+import { encodeVectors } from '@/app/lib/runs/vectorCodec';
 
 // Who may do what is the product rule in app/lib/permissions.ts, written out here by hand
 // (common practice, no source): 401 without a session, 404 for outsiders (the workspace is
@@ -80,6 +83,42 @@ async function someMailId(): Promise<number> {
 
 const ws = () => `/api/workspaces/${workspace.slug}`;
 
+// A real H2 STO-3G FCI run (computed once in beforeAll) is what the save row sends.
+const h2RunFile = {
+  format: 'ketbook-run/1',
+  system: { type: 'molecule', units: 'bohr', atoms: [['H', 0, 0, 0], ['H', 0, 0, 1.4]], basis: 'STO-3G' },
+  ci: { space: 'FCI' },
+};
+let h2Result: unknown;
+
+async function freshRunId(): Promise<string> {
+  const { Run } = getModels();
+  const run = await Run.create({
+    publicId: randomBytes(12).toString('base64url'),
+    workspaceId: workspace.id,
+    projectId: null,
+    createdBy: users.owner.id,
+    title: `matrix run ${uniqueSuffix()}`,
+    systemLabel: 'H2',
+    basisLabel: 'STO-3G',
+    methodLabel: 'RHF · FCI',
+    electrons: 2,
+    determinantCount: 4,
+    energyUnit: 'hartree',
+    referenceEnergy: null,
+    lowestEnergy: null,
+    runFileHash: '0'.repeat(64),
+    solverVersion: 'matrix',
+    runFile: JSON.stringify(h2RunFile),
+    result: JSON.stringify(h2Result),
+    ciVector: Buffer.from(encodeVectors([[1, 0, 0, 0]]).bytes),
+    ciVectorRoots: 1,
+    ciVectorLength: 4,
+    ciVectorBytes: encodeVectors([[1, 0, 0, 0]]).bytes.byteLength,
+  });
+  return run.publicId;
+}
+
 const rows: Row[] = [
   { name: 'health', method: 'GET', prepare: async () => ({ path: '/api/health' }), expected: statuses(200, 200, 200, 200, 200, 200) },
   { name: 'me', method: 'GET', prepare: async () => ({ path: '/api/auth/me' }), expected: statuses(401, 200, 200, 200, 200, 200) },
@@ -145,6 +184,32 @@ const rows: Row[] = [
     prepare: async () => ({ path: `${ws()}/projects/${await freshProjectId()}` }),
     expected: statuses(401, 404, 403, 200, 200, 403),
   },
+  { name: 'list runs', method: 'GET', prepare: async () => ({ path: `${ws()}/runs` }), expected: statuses(401, 404, 200, 200, 200, 200) },
+  {
+    name: 'save run',
+    method: 'POST',
+    prepare: async () => ({ path: `${ws()}/runs`, body: { title: `saved ${uniqueSuffix()}`, runFile: h2RunFile, result: h2Result } }),
+    expected: statuses(401, 404, 403, 201, 201, 403),
+  },
+  { name: 'open run', method: 'GET', prepare: async () => ({ path: `${ws()}/runs/${await freshRunId()}` }), expected: statuses(401, 404, 200, 200, 200, 200) },
+  {
+    name: 'run vectors',
+    method: 'GET',
+    prepare: async () => ({ path: `${ws()}/runs/${await freshRunId()}/vector` }),
+    expected: statuses(401, 404, 200, 200, 200, 200),
+  },
+  {
+    name: 'rename or tag run',
+    method: 'PATCH',
+    prepare: async () => ({ path: `${ws()}/runs/${await freshRunId()}`, body: { title: `renamed ${uniqueSuffix()}`, tags: ['matrix'] } }),
+    expected: statuses(401, 404, 403, 200, 200, 403),
+  },
+  {
+    name: 'delete run',
+    method: 'DELETE',
+    prepare: async () => ({ path: `${ws()}/runs/${await freshRunId()}` }),
+    expected: statuses(401, 404, 403, 200, 200, 403),
+  },
   { name: 'outbox list', method: 'GET', prepare: async () => ({ path: '/api/admin/outbox' }), expected: statuses(401, 403, 403, 403, 403, 200) },
   {
     name: 'outbox message',
@@ -164,6 +229,8 @@ beforeAll(async () => {
   await addMember(workspace.id, viewer, 'viewer');
   await addMember(workspace.id, editor, 'editor');
   await makeAdmin(admin);
+  const result = await runCalculation(parseRunFile(h2RunFile));
+  h2Result = result;
 });
 
 afterAll(async () => {
