@@ -10,6 +10,8 @@ import { SolverError } from '../solver/errors';
 import { parseRunFile } from '../solver/runFile/parse';
 import { toJsonSafe } from '../solver/runFile/jsonSafety';
 import { runCalculation, estimateRun } from '../solver/run';
+import { planScan, runScan, scanToJson } from '../solver/scan';
+import type { RunFile } from '../solver/runFile/schema';
 import type { ProgressEvent } from '../solver/types';
 
 const KNOWN_FLAGS = new Set(['--estimate', '--quiet']);
@@ -37,6 +39,36 @@ function printError(error: unknown): number {
   return EXIT_CODES[solverError.code] ?? 1;
 }
 
+/**
+ * A run file with a "scan": one JSON document with "points", "curves" and "constants" (see
+ * DEVELOPERS.md, "Scans"); progress per point on stderr. --estimate sizes each method at the
+ * first point.
+ */
+async function solveScan(runFile: RunFile, flags: string[]): Promise<number> {
+  const quiet = flags.includes('--quiet');
+  if (flags.includes('--estimate')) {
+    const plan = planScan(runFile);
+    const estimates = plan.methods.map((m) => ({
+      method: m.label,
+      estimate: m.ci ? estimateRun({ ...plan.pointRunFiles[0], reference: m.reference, ci: m.ci } as RunFile) : null,
+    }));
+    process.stdout.write(`${JSON.stringify(toJsonSafe({ points: plan.points.length, methods: estimates }))}\n`);
+    return 0;
+  }
+  const scan = await runScan(runFile, {
+    onPoint: quiet
+      ? undefined
+      : (index, result, plan) =>
+          process.stderr.write(
+            `point ${index + 1}/${plan.points.length} at ${plan.points[index]} ${plan.units}: ` +
+              (result ? result.methods.map((m, k) => `${plan.methods[k].label} ${m.energies[0].toFixed(10)}`).join(', ') : 'not converged') +
+              '\n',
+          ),
+  });
+  process.stdout.write(`${scanToJson(scan)}\n`);
+  return 0;
+}
+
 async function main(argv: string[]): Promise<number> {
   const flags = argv.filter((a) => a.startsWith('--'));
   const paths = argv.filter((a) => !a.startsWith('--'));
@@ -61,6 +93,7 @@ async function main(argv: string[]): Promise<number> {
   }
   try {
     const runFile = parseRunFile(json);
+    if (runFile.scan) return await solveScan(runFile, flags);
     if (flags.includes('--estimate')) {
       process.stdout.write(`${JSON.stringify(toJsonSafe(estimateRun(runFile)))}\n`);
       return 0;

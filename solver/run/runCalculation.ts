@@ -7,7 +7,8 @@ import { SOLVER_VERSION } from '../version';
 import { badInput } from '../errors';
 import { slaterCondonElement } from '../ci';
 import { lowestOrbitalsPattern } from '../ci/bits';
-import { prepareSystem } from './prepareSystem';
+import { prepareSystem, type PreparedSystem } from './prepareSystem';
+import type { SpinPair } from '../scf';
 import { moleculeScf, modelScf, type ReferenceOrbitals } from './scfStage';
 import { runCiStage } from './ciStage';
 import type { RunResult } from './result';
@@ -21,6 +22,14 @@ export interface RunOptions {
    * keeps them to save with the run). Not part of the run file, so it leaves its hash alone.
    */
   includeVectors?: boolean;
+  /** Starting MO coefficients for the SCF (a scan passes its neighbour's); not part of the run file. */
+  initialOrbitals?: SpinPair<Float64Array>;
+  /**
+   * The system already prepared from this run file and its SCF solution already chosen (a scan
+   * runs several methods on one geometry and picks the SCF solution itself). Both must come
+   * from this run file's system; the SCF stage is then skipped.
+   */
+  precomputed?: { prepared: PreparedSystem; reference: ReferenceOrbitals | null };
 }
 
 function identity(n: number): Float64Array {
@@ -40,12 +49,14 @@ export async function runCalculation(runFile: RunFile, options: RunOptions = {})
   };
 
   const runFileHashHex = await runFileHash(runFile);
-  const prepared = prepareSystem(runFile);
+  const prepared = options.precomputed?.prepared ?? prepareSystem(runFile);
   lap('setup');
 
   const warnings: string[] = [];
   let reference: ReferenceOrbitals | null = null;
-  if (prepared.kind === 'molecule') {
+  if (options.precomputed) {
+    reference = options.precomputed.reference;
+  } else if (prepared.kind === 'molecule') {
     reference = moleculeScf(prepared, runFile, options);
     lap('scf');
   } else if (runFile.reference) {

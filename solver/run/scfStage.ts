@@ -1,7 +1,7 @@
 import type { RunFile } from '../runFile/schema';
 import type { ProgressSink } from '../types';
 import { overlapMatrix, kineticMatrix, nuclearAttractionMatrix, electronRepulsionIntegrals, dipoleMatrices } from '../integrals';
-import { runScf, stabilityAnalysis, followInstability, type ScfProblem, type ScfResult } from '../scf';
+import { runScf, stabilityAnalysis, followInstability, type ScfProblem, type ScfResult, type SpinPair, type StabilityResult } from '../scf';
 import { mullikenCharges, dipoleMomentDebye } from '../properties';
 import { centreOfMassBohr } from '../system/molecule';
 import { orbitalIrreps, irrepLabel } from '../symmetry';
@@ -23,12 +23,15 @@ export interface ReferenceOrbitals {
 
 export interface ScfStageOptions {
   onProgress?: ProgressSink;
+  /** Starting MO coefficients (e.g. a neighbouring scan point's) instead of the run file's guess. */
+  initialOrbitals?: SpinPair<Float64Array>;
 }
 
-function scfOptionsFor(runFile: RunFile, reference: 'RHF' | 'UHF' | 'ROHF', onProgress?: ProgressSink) {
+export function scfOptionsFor(runFile: RunFile, reference: 'RHF' | 'UHF' | 'ROHF', onProgress?: ProgressSink, initialOrbitals?: SpinPair<Float64Array>) {
   const s = runFile.scf;
   return {
     reference,
+    initialOrbitals,
     guess: s?.guess ?? 'huckel',
     maxIterations: s?.maxIterations ?? 200,
     energyTolerance: s?.energyTolerance ?? 1e-10,
@@ -42,12 +45,41 @@ function scfOptionsFor(runFile: RunFile, reference: 'RHF' | 'UHF' | 'ROHF', onPr
   } as const;
 }
 
-function defaultReference(twoS: number): 'RHF' | 'ROHF' {
+export function defaultReference(twoS: number): 'RHF' | 'ROHF' {
   return twoS === 0 ? 'RHF' : 'ROHF';
 }
 
-function solveReference(problem: ScfProblem, runFile: RunFile, reference: 'RHF' | 'UHF' | 'ROHF', onProgress?: ProgressSink) {
-  let scf = runScf(problem, scfOptionsFor(runFile, reference, onProgress));
+/** The stability figures a result reports, and the warnings an unstable or unchecked solution gets. */
+export function judgeStability(analysis: StabilityResult, reference: 'RHF' | 'UHF' | 'ROHF'): { stability: ScfSummary['stability']; warnings: string[] } {
+  const warnings: string[] = [];
+  const stability = {
+    rhfToRhf: analysis.rhfToRhf?.lowestEigenvalue,
+    rhfToUhf: analysis.rhfToUhf?.lowestEigenvalue,
+    uhfToUhf: analysis.uhfToUhf?.lowestEigenvalue,
+    stable: analysis.stable,
+  };
+  if (!analysis.analysed) {
+    warnings.push(`stability analysis is not available for ${reference}; the solution was not checked`);
+  } else if (!analysis.stable) {
+    const kind = analysis.instability?.kind;
+    const eigenvalue = analysis.instability?.lowestEigenvalue.toExponential(3);
+    warnings.push(
+      kind === 'rhf-to-uhf'
+        ? `the RHF solution is unstable towards UHF (lowest triplet orbital-Hessian eigenvalue ${eigenvalue} Eh): a lower, spin-broken UHF solution exists; the RHF orbitals remain a valid CI reference`
+        : `the ${reference} solution is unstable (${kind ?? 'orbital'} instability, lowest orbital-Hessian eigenvalue ${eigenvalue} Eh): a lower solution of the same kind exists; set scf.followInstability to follow it`,
+    );
+  }
+  return { stability, warnings };
+}
+
+function solveReference(
+  problem: ScfProblem,
+  runFile: RunFile,
+  reference: 'RHF' | 'UHF' | 'ROHF',
+  onProgress?: ProgressSink,
+  initialOrbitals?: SpinPair<Float64Array>,
+) {
+  let scf = runScf(problem, scfOptionsFor(runFile, reference, onProgress, initialOrbitals));
   let stability: ScfSummary['stability'] = null;
   const warnings: string[] = [];
   if (runFile.scf?.stability ?? true) {
@@ -56,23 +88,9 @@ function solveReference(problem: ScfProblem, runFile: RunFile, reference: 'RHF' 
       scf = followInstability(problem, scf, scfOptionsFor(runFile, reference, onProgress));
       analysis = stabilityAnalysis(problem, scf);
     }
-    stability = {
-      rhfToRhf: analysis.rhfToRhf?.lowestEigenvalue,
-      rhfToUhf: analysis.rhfToUhf?.lowestEigenvalue,
-      uhfToUhf: analysis.uhfToUhf?.lowestEigenvalue,
-      stable: analysis.stable,
-    };
-    if (!analysis.analysed) {
-      warnings.push(`stability analysis is not available for ${reference}; the solution was not checked`);
-    } else if (!analysis.stable) {
-      const kind = analysis.instability?.kind;
-      const eigenvalue = analysis.instability?.lowestEigenvalue.toExponential(3);
-      warnings.push(
-        kind === 'rhf-to-uhf'
-          ? `the RHF solution is unstable towards UHF (lowest triplet orbital-Hessian eigenvalue ${eigenvalue} Eh): a lower, spin-broken UHF solution exists; the RHF orbitals remain a valid CI reference`
-          : `the ${reference} solution is unstable (${kind ?? 'orbital'} instability, lowest orbital-Hessian eigenvalue ${eigenvalue} Eh): a lower solution of the same kind exists; set scf.followInstability to follow it`,
-      );
-    }
+    const judged = judgeStability(analysis, reference);
+    stability = judged.stability;
+    warnings.push(...judged.warnings);
   }
   return { scf, stability, warnings };
 }
@@ -99,7 +117,8 @@ function summarise(scf: ScfResult, stability: ScfSummary['stability'], extra: Pa
   };
 }
 
-export function moleculeScf(prepared: PreparedMolecule, runFile: RunFile, { onProgress }: ScfStageOptions): ReferenceOrbitals {
+/** The AO integrals and electron counts of a prepared molecule: everything the SCF needs. */
+export function moleculeProblem(prepared: PreparedMolecule, onProgress?: ProgressSink): ScfProblem {
   const { basis, molecule } = prepared;
   const n = basis.nFunctions;
   const overlap = overlapMatrix(basis);
@@ -121,8 +140,32 @@ export function moleculeScf(prepared: PreparedMolecule, runFile: RunFile, { onPr
     nAlpha,
     nBeta,
   };
+  return problem;
+}
+
+export function moleculeScf(prepared: PreparedMolecule, runFile: RunFile, { onProgress, initialOrbitals }: ScfStageOptions): ReferenceOrbitals {
+  const problem = moleculeProblem(prepared, onProgress);
   const reference = runFile.reference ?? defaultReference(prepared.twoS);
-  const { scf, stability, warnings } = solveReference(problem, runFile, reference, onProgress);
+  const { scf, stability, warnings } = solveReference(problem, runFile, reference, onProgress, initialOrbitals);
+  return moleculeReference(prepared, problem, scf, stability, warnings);
+}
+
+/**
+ * Orbital labels, Mulliken charges and the dipole of a converged molecular SCF solution, and
+ * the orbitals a CI uses. Split from `moleculeScf` so a scan can choose among several SCF
+ * solutions of one geometry and still hand the CI the same kind of reference.
+ */
+export function moleculeReference(
+  prepared: PreparedMolecule,
+  problem: ScfProblem,
+  scf: ScfResult,
+  stability: ScfSummary['stability'],
+  warningsIn: string[],
+): ReferenceOrbitals {
+  const { basis, molecule } = prepared;
+  const n = basis.nFunctions;
+  const overlap = problem.overlap;
+  const warnings = [...warningsIn];
 
   let irreps: Int32Array | null = null;
   let coefficients = scf.coefficients.alpha;

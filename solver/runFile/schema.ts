@@ -80,8 +80,8 @@ export const referenceSchema = z.enum(['RHF', 'UHF', 'ROHF']);
 
 export const ciSpaceNames = ['CIS', 'CISD', 'CISDT', 'CISDTQ', 'FCI', 'CAS', 'CI'] as const;
 
-export const ciSchema = z
-  .object({
+/** The fields of a CI setting; `ciSchema` adds the checks between them. */
+const ciFields = {
     space: z.enum(ciSpaceNames),
     /** Only with "space": "CI": the highest excitation level kept (spin orbitals, α and β together). */
     excitationLevel: z.number().int().min(1).max(100).optional(),
@@ -119,9 +119,15 @@ export const ciSchema = z
       })
       .strict()
       .optional(),
-  })
-  .strict()
-  .superRefine((ci, ctx) => {
+};
+
+type CiFieldsOutput = z.output<z.ZodObject<typeof ciFields>>;
+type CiChecked = Omit<CiFieldsOutput, 'space'> & { space?: CiFieldsOutput['space'] };
+
+/** Checks between CI fields, shared by the run's `ci` and each entry of a scan's `methods`. */
+function checkCi(ci: CiChecked, ctx: z.RefinementCtx): void {
+  if (ci.space === undefined) return;
+  {
     if (ci.space === 'CI' && ci.excitationLevel === undefined) {
       ctx.addIssue({ code: 'custom', path: ['excitationLevel'], message: 'space "CI" needs an excitationLevel' });
     }
@@ -154,7 +160,10 @@ export const ciSchema = z
     if (ci.ras && ci.ras.ras1.some((p) => ci.ras!.ras3.includes(p))) {
       ctx.addIssue({ code: 'custom', path: ['ras'], message: 'an orbital cannot be in both ras1 and ras3' });
     }
-  });
+  }
+}
+
+export const ciSchema = z.object(ciFields).strict().superRefine(checkCi);
 
 export const scfSettingsSchema = z
   .object({
@@ -185,6 +194,153 @@ export const outputSettingsSchema = z
   })
   .strict();
 
+/**
+ * One method of a scan: the fields of `ci` with `space` optional (no space means SCF only),
+ * the reference it starts from, and `plusQ` for the Langhoff–Davidson-corrected energy of a
+ * truncated CI (CISD+Q and the like).
+ */
+export const scanMethodSchema = z
+  .object({
+    ...ciFields,
+    space: z.enum(ciSpaceNames).optional(),
+    reference: referenceSchema.optional(),
+    plusQ: z.boolean().default(false),
+    /** Free text shown beside the curve, e.g. "CAS(2,2)". */
+    label: z.string().min(1).max(60).optional(),
+  })
+  .strict()
+  .superRefine((method, ctx) => {
+    checkCi(method, ctx);
+    if (method.space === undefined) {
+      const ciOnly = (['excitationLevel', 'active', 'activeOrbitals', 'ras', 'twoMs', 'targetMultiplicity', 'irrep'] as const).filter(
+        (key) => method[key] !== undefined,
+      );
+      if (ciOnly.length > 0) {
+        ctx.addIssue({ code: 'custom', path: [ciOnly[0]], message: `${ciOnly[0]} is a CI setting: give the method a space, or leave it out for SCF only` });
+      }
+      if (method.roots > 1) ctx.addIssue({ code: 'custom', path: ['roots'], message: 'an SCF-only method has one root; give a CI space for excited roots' });
+    }
+    if (method.reference === 'UHF' && method.space !== undefined) {
+      ctx.addIssue({ code: 'custom', path: ['space'], message: 'UHF methods are SCF only: CI needs RHF or ROHF orbitals' });
+    }
+    if (method.plusQ && !(method.space === 'CISD' || method.space === 'CISDT' || method.space === 'CISDTQ' || method.space === 'CI')) {
+      ctx.addIssue({ code: 'custom', path: ['plusQ'], message: 'plusQ goes with a truncated CI (CISD, CISDT, CISDTQ or CI with an excitationLevel)' });
+    }
+    if (method.plusQ && method.roots > 1) {
+      ctx.addIssue({ code: 'custom', path: ['roots'], message: 'the +Q correction is for the lowest root only: use roots 1 with plusQ' });
+    }
+    if (method.plusQ && (method.ras || method.irrep)) {
+      ctx.addIssue({ code: 'custom', path: ['plusQ'], message: 'plusQ needs the plain excitation space: no ras limits and no irrep restriction' });
+    }
+  });
+
+const atomIndex = z.number().int('an atom index is a whole number').min(0, 'atom indices start at 0').max(59);
+
+export const scanCoordinateSchema = z.discriminatedUnion('type', [
+  z
+    .object({
+      type: z.literal('distance'),
+      /** The distance from atoms[0] to atoms[1]. */
+      atoms: z.tuple([atomIndex, atomIndex]),
+      /** The group that moves along the atoms[0]→atoms[1] axis; default [atoms[1]]. */
+      move: z.array(atomIndex).min(1).max(59).optional(),
+    })
+    .strict(),
+  z
+    .object({
+      type: z.literal('stretch'),
+      /** Bonds set to the same length together; the second atom of each bond moves along it. */
+      bonds: z.array(z.tuple([atomIndex, atomIndex])).min(2, 'a stretch needs at least two bonds; use "distance" for one').max(12),
+    })
+    .strict(),
+  z
+    .object({
+      type: z.literal('angle'),
+      /** The angle atoms[0]–atoms[1]–atoms[2] at atoms[1]. */
+      atoms: z.tuple([atomIndex, atomIndex, atomIndex]),
+      /** The group rotated about atoms[1]; default [atoms[2]]. */
+      move: z.array(atomIndex).min(1).max(59).optional(),
+    })
+    .strict(),
+]);
+
+/** At most this many points per scan: a browser pool should finish a scan in minutes. */
+export const MAX_SCAN_POINTS = 2000;
+
+export const scanSchema = z
+  .object({
+    coordinate: scanCoordinateSchema,
+    from: finite.optional(),
+    to: finite.optional(),
+    step: finite.optional(),
+    /** An explicit list of coordinate values instead of from/to/step. */
+    points: z.array(finite).min(1).max(MAX_SCAN_POINTS).optional(),
+    /** "bohr" or "angstrom" for distances and stretches, "degree" for angles. */
+    units: z.enum(['bohr', 'angstrom', 'degree']),
+    /** Index into `methods` of the method errors are measured against (default: the first FCI method). */
+    referenceMethod: z.number().int().min(0).optional(),
+    /** How the minimum is first located: a natural cubic spline through all points, or a quartic over the seven nearest. */
+    fit: z.enum(['spline', 'polynomial']).default('spline'),
+    /** Refine R_e, E_min and the curvature by extra solver calls around the fitted minimum. */
+    refine: z.boolean().default(true),
+    /** What D_e is measured against: separately computed fragments (default for a distance), the far end of the scan, or nothing. */
+    dissociation: z.enum(['fragments', 'far-end', 'none']).optional(),
+    /** The two fragments of a distance scan (default: the moved group and the rest, neutral, lowest spin). */
+    fragments: z
+      .array(
+        z
+          .object({
+            atoms: z.array(atomIndex).min(1).max(59),
+            charge: z.number().int().min(-10).max(20).default(0),
+            multiplicity: z.number().int().min(1).max(11).optional(),
+          })
+          .strict(),
+      )
+      .length(2, 'give exactly two fragments')
+      .optional(),
+  })
+  .strict()
+  .superRefine((scan, ctx) => {
+    const ranged = [scan.from, scan.to, scan.step].filter((v) => v !== undefined).length;
+    if (scan.points && ranged > 0) {
+      ctx.addIssue({ code: 'custom', path: ['points'], message: 'give either points or from, to and step, not both' });
+    } else if (!scan.points && ranged < 3) {
+      ctx.addIssue({ code: 'custom', path: ['step'], message: 'a scan needs from, to and step (or a points list)' });
+    } else if (!scan.points) {
+      const { from, to, step } = scan as { from: number; to: number; step: number };
+      if (step === 0) ctx.addIssue({ code: 'custom', path: ['step'], message: 'step must not be zero' });
+      else if (to !== from && Math.sign(to - from) !== Math.sign(step)) {
+        ctx.addIssue({ code: 'custom', path: ['step'], message: `a step of ${step} never goes from ${from} to ${to}` });
+      } else if (Math.abs(to - from) / Math.abs(step) + 1 > MAX_SCAN_POINTS + 1e-9) {
+        ctx.addIssue({ code: 'custom', path: ['step'], message: `this range and step give more than ${MAX_SCAN_POINTS} points` });
+      }
+    }
+    const values = scan.points ?? (scan.from !== undefined ? [scan.from, scan.to ?? scan.from] : []);
+    const isAngle = scan.coordinate.type === 'angle';
+    if (isAngle !== (scan.units === 'degree')) {
+      ctx.addIssue({
+        code: 'custom',
+        path: ['units'],
+        message: isAngle ? 'an angle scan is in "degree"' : 'a distance or stretch scan is in "bohr" or "angstrom"',
+      });
+    }
+    if (isAngle && values.some((v) => v <= 0 || v > 180)) {
+      ctx.addIssue({ code: 'custom', path: [scan.points ? 'points' : 'from'], message: 'angles must lie in (0, 180] degrees' });
+    }
+    if (!isAngle && values.some((v) => v <= 0)) {
+      ctx.addIssue({ code: 'custom', path: [scan.points ? 'points' : 'from'], message: 'distances must be positive' });
+    }
+    if (scan.points && new Set(scan.points).size !== scan.points.length) {
+      ctx.addIssue({ code: 'custom', path: ['points'], message: 'points lists a value twice' });
+    }
+    if (scan.fragments && scan.coordinate.type !== 'distance') {
+      ctx.addIssue({ code: 'custom', path: ['fragments'], message: 'fragments go with a distance scan' });
+    }
+    if (scan.dissociation === 'fragments' && scan.coordinate.type !== 'distance') {
+      ctx.addIssue({ code: 'custom', path: ['dissociation'], message: 'fragment energies go with a distance scan; use "far-end" or "none"' });
+    }
+  });
+
 export const runFileSchema = z
   .object({
     format: z.literal(RUN_FILE_FORMAT, { message: `format must be "${RUN_FILE_FORMAT}"` }),
@@ -197,9 +353,17 @@ export const runFileSchema = z
     symmetry: z.boolean().default(true),
     budget: z.object({ memoryBytes: z.number().int().min(1 << 20).max(2 ** 34).default(DEFAULT_BUDGET_BYTES) }).strict().optional(),
     output: outputSettingsSchema.optional(),
+    /** A series of runs along a coordinate (DEVELOPERS.md, "Scans"). */
+    scan: scanSchema.optional(),
+    /** The methods run at each scan point; without it a scan runs the run's own reference and ci. */
+    methods: z.array(scanMethodSchema).min(1, 'list at least one method').max(20, 'at most 20 methods').optional(),
   })
   .strict()
   .superRefine((run, ctx) => {
+    if (run.methods && !run.scan) {
+      ctx.addIssue({ code: 'custom', path: ['methods'], message: 'a methods list goes with a scan' });
+    }
+    if (run.scan) checkScanAgainstRun(run, ctx);
     if (run.reference === 'UHF' && run.ci) {
       ctx.addIssue({
         code: 'custom',
@@ -212,6 +376,71 @@ export const runFileSchema = z
     }
   });
 
+type ScanOutput = z.output<typeof scanSchema>;
+
+/** Checks of a scan that need the rest of the run file: atom indices, fragments, methods. */
+function checkScanAgainstRun(
+  run: { system: z.output<typeof systemSchema>; scan?: ScanOutput; methods?: z.output<typeof scanMethodSchema>[]; ci?: unknown; reference?: string },
+  ctx: z.RefinementCtx,
+): void {
+  const scan = run.scan!;
+  if (run.system.type !== 'molecule') {
+    ctx.addIssue({ code: 'custom', path: ['scan'], message: 'a scan moves atoms: it needs a molecule' });
+    return;
+  }
+  const nAtoms = run.system.atoms.length;
+  const c = scan.coordinate;
+  const named: number[] = c.type === 'stretch' ? c.bonds.flat() : [...c.atoms, ...(c.move ?? [])];
+  const outside = named.find((a) => a >= nAtoms);
+  if (outside !== undefined) {
+    ctx.addIssue({ code: 'custom', path: ['scan', 'coordinate'], message: `atom ${outside} does not exist: the molecule has atoms 0 to ${nAtoms - 1}` });
+    return;
+  }
+  if (c.type === 'distance' || c.type === 'angle') {
+    if (new Set(c.atoms).size !== c.atoms.length) {
+      ctx.addIssue({ code: 'custom', path: ['scan', 'coordinate', 'atoms'], message: 'the coordinate names an atom twice' });
+    }
+    const move = c.move ?? [c.atoms[c.atoms.length - 1]];
+    const moving = c.atoms[c.atoms.length - 1];
+    if (!move.includes(moving)) {
+      ctx.addIssue({ code: 'custom', path: ['scan', 'coordinate', 'move'], message: `the moved group must contain atom ${moving}` });
+    }
+    const fixed = c.atoms.slice(0, -1).find((a) => move.includes(a));
+    if (fixed !== undefined) {
+      ctx.addIssue({ code: 'custom', path: ['scan', 'coordinate', 'move'], message: `atom ${fixed} defines the coordinate and cannot move with the group` });
+    }
+  } else {
+    const seconds = c.bonds.map((b) => b[1]);
+    if (c.bonds.some(([a, b]) => a === b)) {
+      ctx.addIssue({ code: 'custom', path: ['scan', 'coordinate', 'bonds'], message: 'a bond joins two different atoms' });
+    } else if (new Set(seconds).size !== seconds.length || c.bonds.some(([a]) => seconds.includes(a))) {
+      ctx.addIssue({ code: 'custom', path: ['scan', 'coordinate', 'bonds'], message: 'each bond moves its second atom: no atom may move in two bonds or anchor a moving bond' });
+    }
+  }
+  if (scan.fragments) {
+    const all = scan.fragments.flatMap((f) => f.atoms);
+    if (all.some((a) => a >= nAtoms) || new Set(all).size !== all.length || all.length !== nAtoms) {
+      ctx.addIssue({ code: 'custom', path: ['scan', 'fragments'], message: `the two fragments must share the atoms 0 to ${nAtoms - 1} between them, each atom once` });
+    }
+  }
+  if (run.methods && run.ci !== undefined) {
+    ctx.addIssue({ code: 'custom', path: ['ci'], message: 'with a methods list, put the CI settings in methods' });
+  }
+  const methodCount = run.methods?.length ?? 1;
+  if (scan.referenceMethod !== undefined && scan.referenceMethod >= methodCount) {
+    ctx.addIssue({ code: 'custom', path: ['scan', 'referenceMethod'], message: `there is no method ${scan.referenceMethod}: methods are 0 to ${methodCount - 1}` });
+  }
+  run.methods?.forEach((method, k) => {
+    const reference = method.reference ?? run.reference;
+    if (reference === 'RHF' && run.system.type === 'molecule' && run.system.multiplicity !== 1) {
+      ctx.addIssue({ code: 'custom', path: ['methods', k, 'reference'], message: 'RHF needs a singlet; use ROHF or UHF for multiplicity > 1' });
+    }
+    if (reference === 'UHF' && method.space !== undefined) {
+      ctx.addIssue({ code: 'custom', path: ['methods', k, 'space'], message: 'UHF methods are SCF only: CI needs RHF or ROHF orbitals' });
+    }
+  });
+}
+
 /** What a caller writes (defaults may be left out). */
 export type RunFileInput = z.input<typeof runFileSchema>;
 /** What the solver receives after parsing (defaults filled in). */
@@ -219,3 +448,6 @@ export type RunFile = z.output<typeof runFileSchema>;
 export type CiSettings = z.output<typeof ciSchema>;
 export type ScfSettings = z.output<typeof scfSettingsSchema>;
 export type SystemSpec = z.output<typeof systemSchema>;
+export type ScanSettings = z.output<typeof scanSchema>;
+export type ScanMethod = z.output<typeof scanMethodSchema>;
+export type ScanCoordinate = z.output<typeof scanCoordinateSchema>;
