@@ -24,6 +24,22 @@ export interface FollowedStates {
   flags: ScanFlag[];
 }
 
+/** Roots closer than this (hartree) are one degenerate level (common practice, no source). */
+export const DEGENERATE_HARTREE = 1e-7;
+
+function degenerateRoots(energies: number[]): Set<number> {
+  const out = new Set<number>();
+  for (let j = 0; j < energies.length; j++) {
+    for (let k = j + 1; k < energies.length; k++) {
+      if (Math.abs(energies[j] - energies[k]) < DEGENERATE_HARTREE) {
+        out.add(j);
+        out.add(k);
+      }
+    }
+  }
+  return out;
+}
+
 const keyOf = (m: PointMethodResult, j: number) => `${m.irreps[j] ?? ''}|${m.multiplicities[j]}`;
 
 /**
@@ -59,9 +75,12 @@ export function followStates(results: (PointMethodResult | null)[], values: numb
     if (!now) continue;
     const before = results[prev]!;
     const taken = new Set<number>();
+    // Degenerate roots (a singlet and a triplet of two far-apart atoms) come out as arbitrary
+    // mixtures whose symmetry and spin labels mean nothing: they are matched by energy below.
+    const ambiguous = degenerateRoots(now.energies);
     for (const key of new Set(keys)) {
       const curves = keys.map((k, c) => (k === key ? c : -1)).filter((c) => c >= 0);
-      const roots = now.energies.map((_, j) => j).filter((j) => keyOf(now, j) === key);
+      const roots = now.energies.map((_, j) => j).filter((j) => !ambiguous.has(j) && keyOf(now, j) === key);
       if (labelled[curves[0]]) {
         curves.forEach((c, k) => {
           if (k < roots.length) rootAtPoint[c][p] = roots[k];
@@ -83,6 +102,18 @@ export function followStates(results: (PointMethodResult | null)[], values: numb
         }
       }
     }
+    // Curves left over take the degenerate roots nearest their previous energy.
+    const claimed = new Set(rootAtPoint.map((r) => r[p]).filter((j): j is number => j !== null));
+    const open = [...ambiguous].filter((j) => !claimed.has(j));
+    const waiting = rootAtPoint.map((r, c) => c).filter((c) => rootAtPoint[c][p] === null && rootAtPoint[c][prev] !== null);
+    const byDistance: { c: number; j: number; d: number }[] = [];
+    for (const c of waiting) for (const j of open) byDistance.push({ c, j, d: Math.abs(now.energies[j] - before.energies[rootAtPoint[c][prev]!]) });
+    byDistance.sort((a, b) => a.d - b.d || a.j - b.j);
+    for (const { c, j } of byDistance) {
+      if (rootAtPoint[c][p] !== null || claimed.has(j)) continue;
+      rootAtPoint[c][p] = j;
+      claimed.add(j);
+    }
 
     for (let c = 0; c < nCurves; c++) {
       if (rootAtPoint[c][prev] !== null && rootAtPoint[c][p] === null) {
@@ -101,7 +132,7 @@ export function followStates(results: (PointMethodResult | null)[], values: numb
         if (a0 === null || b0 === null || a1 === null || b1 === null) continue;
         const d0 = before.energies[a0] - before.energies[b0];
         const d1 = now.energies[a1] - now.energies[b1];
-        if (Math.abs(d0) > 1e-10 && Math.abs(d1) > 1e-10 && Math.sign(d0) !== Math.sign(d1)) {
+        if (Math.abs(d0) > DEGENERATE_HARTREE && Math.abs(d1) > DEGENERATE_HARTREE && Math.sign(d0) !== Math.sign(d1)) {
           const value = values[prev] + ((values[p] - values[prev]) * d0) / (d0 - d1);
           flags.push({
             type: 'crossing',
@@ -112,7 +143,7 @@ export function followStates(results: (PointMethodResult | null)[], values: numb
             message: `states ${c1} (${keys[c1].replace('|', ', multiplicity ')}) and ${c2} (${keys[c2].replace('|', ', multiplicity ')}) of method ${methodIndex} cross near ${value.toPrecision(5)}`,
           });
         }
-        if (keys[c1] === keys[c2] && labelled[c1]) {
+        if (keys[c1] === keys[c2] && labelled[c1] && !ambiguous.has(a1) && !ambiguous.has(b1)) {
           const self = characterOverlap(before.leading[a0], now.leading[a1]);
           const swapped = characterOverlap(before.leading[a0], now.leading[b1]);
           if (self < CHARACTER_CHANGE_OVERLAP && swapped > self) {
