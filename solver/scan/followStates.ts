@@ -40,6 +40,11 @@ function degenerateRoots(energies: number[]): Set<number> {
   return out;
 }
 
+const describeKey = (key: string) => {
+  const [irrep, multiplicity] = key.split('|');
+  return irrep ? `${irrep}, multiplicity ${multiplicity}` : `multiplicity ${multiplicity}`;
+};
+
 const keyOf = (m: PointMethodResult, j: number) => `${m.irreps[j] ?? ''}|${m.multiplicities[j]}`;
 
 /**
@@ -68,6 +73,12 @@ export function followStates(results: (PointMethodResult | null)[], values: numb
     });
     return { rootAtPoint, irreps: start.irreps.slice(0, 1), multiplicities: start.multiplicities.slice(0, 1), flags };
   }
+
+  // Per pair of curves: the last point where they were apart, and on which side (a crossing
+  // that lands exactly on a grid point shows as a sign change across that point).
+  const lastApart = new Map<string, { p: number; d: number }>();
+  // Per curve: the point whose character an exchange is measured against (reset at each exchange).
+  const characterPoint = Array.from({ length: nCurves }, () => first);
 
   let prev = first;
   for (let p = first + 1; p < results.length; p++) {
@@ -122,30 +133,38 @@ export function followStates(results: (PointMethodResult | null)[], values: numb
           between: [prev, p],
           methods: [methodIndex],
           curves: [c],
-          message: `root ${c} of method ${methodIndex} (${keys[c].replace('|', ', multiplicity ')}) is no longer among the computed roots; ask for more roots`,
+          message: `root ${c} of method ${methodIndex} (${describeKey(keys[c])}) is no longer among the computed roots; ask for more roots`,
         });
       }
     }
     for (let c1 = 0; c1 < nCurves; c1++) {
       for (let c2 = c1 + 1; c2 < nCurves; c2++) {
-        const [a0, b0, a1, b1] = [rootAtPoint[c1][prev], rootAtPoint[c2][prev], rootAtPoint[c1][p], rootAtPoint[c2][p]];
-        if (a0 === null || b0 === null || a1 === null || b1 === null) continue;
-        const d0 = before.energies[a0] - before.energies[b0];
+        const a1 = rootAtPoint[c1][p];
+        const b1 = rootAtPoint[c2][p];
+        if (a1 === null || b1 === null) continue;
+        const pair = `${c1},${c2}`;
         const d1 = now.energies[a1] - now.energies[b1];
-        if (Math.abs(d0) > DEGENERATE_HARTREE && Math.abs(d1) > DEGENERATE_HARTREE && Math.sign(d0) !== Math.sign(d1)) {
-          const value = values[prev] + ((values[p] - values[prev]) * d0) / (d0 - d1);
-          flags.push({
-            type: 'crossing',
-            between: [prev, p],
-            value,
-            methods: [methodIndex],
-            curves: [c1, c2],
-            message: `states ${c1} (${keys[c1].replace('|', ', multiplicity ')}) and ${c2} (${keys[c2].replace('|', ', multiplicity ')}) of method ${methodIndex} cross near ${value.toPrecision(5)}`,
-          });
+        const apart = lastApart.get(pair);
+        if (Math.abs(d1) > DEGENERATE_HARTREE) {
+          if (apart && Math.sign(apart.d) !== Math.sign(d1)) {
+            const value = values[apart.p] + ((values[p] - values[apart.p]) * apart.d) / (apart.d - d1);
+            flags.push({
+              type: 'crossing',
+              between: [apart.p, p],
+              value,
+              methods: [methodIndex],
+              curves: [c1, c2],
+              message: `states ${c1} (${describeKey(keys[c1])}) and ${c2} (${describeKey(keys[c2])}) of method ${methodIndex} cross near ${value.toPrecision(5)}`,
+            });
+          }
+          lastApart.set(pair, { p, d: d1 });
         }
-        if (keys[c1] === keys[c2] && labelled[c1] && !ambiguous.has(a1) && !ambiguous.has(b1)) {
-          const self = characterOverlap(before.leading[a0], now.leading[a1]);
-          const swapped = characterOverlap(before.leading[a0], now.leading[b1]);
+        const from = results[characterPoint[c1]]!;
+        const a0 = rootAtPoint[c1][characterPoint[c1]];
+        if (keys[c1] === keys[c2] && labelled[c1] && a0 !== null && !ambiguous.has(a1) && !ambiguous.has(b1)) {
+          // Measured against the character at the last exchange, so one spread over several steps is still seen.
+          const self = characterOverlap(from.leading[a0], now.leading[a1]);
+          const swapped = characterOverlap(from.leading[a0], now.leading[b1]);
           if (self < CHARACTER_CHANGE_OVERLAP && swapped > self) {
             flags.push({
               type: 'avoided-crossing',
@@ -154,6 +173,8 @@ export function followStates(results: (PointMethodResult | null)[], values: numb
               curves: [c1, c2],
               message: `states ${c1} and ${c2} of method ${methodIndex} (same symmetry) exchange character between points ${prev} and ${p}: an avoided crossing`,
             });
+            characterPoint[c1] = p;
+            characterPoint[c2] = p;
           }
         }
       }
