@@ -30,7 +30,8 @@ export interface ChosenScf {
 
 /**
  * The right SCF solution at one scan point. Several starts are converged — the neighbouring
- * point's orbitals (continuity along the curve), the run file's guess, and for UHF a
+ * point's orbitals (continuity along the curve), the run file's guess and the other built-in
+ * guess, and for UHF a
  * spin-symmetry-broken guess (HOMO–LUMO mixing, so H2 can dissociate into two atoms) — each is
  * checked by the orbital-Hessian stability analysis (Seeger & Pople, J. Chem. Phys. 66, 3045
  * (1977)) and an instability of its own kind is followed down. The lowest stable solution is
@@ -43,18 +44,26 @@ export function chooseScfSolution(
   options: { neighbour?: SpinPair<Float64Array>; onProgress?: ProgressSink } = {},
 ): ChosenScf {
   const analyse = runFile.scf?.stability ?? true;
-  const starts: { source: ScfCandidate['source']; initial?: SpinPair<Float64Array>; breakSymmetry: boolean }[] = [];
+  const starts: { source: ScfCandidate['source']; initial?: SpinPair<Float64Array>; guess?: 'huckel' | 'core'; breakSymmetry: boolean }[] = [];
   if (options.neighbour && options.neighbour.alpha.length === problem.nBasis ** 2) {
     starts.push({ source: 'neighbour', initial: options.neighbour, breakSymmetry: false });
   }
-  starts.push({ source: 'guess', breakSymmetry: false });
+  // Both guesses: on an atom the Hückel-like guess can land on an excited configuration (Li 1s²2p) where the core guess does not.
+  const ownGuess = runFile.scf?.guess ?? 'huckel';
+  starts.push({ source: ownGuess, guess: ownGuess, breakSymmetry: false });
+  const otherGuess = ownGuess === 'huckel' ? 'core' : 'huckel';
+  starts.push({ source: otherGuess, guess: otherGuess, breakSymmetry: false });
   if (reference === 'UHF' && problem.nAlpha >= 1 && problem.nAlpha < problem.nBasis) starts.push({ source: 'broken-symmetry', breakSymmetry: true });
 
   const trials: Trial[] = [];
   const failures: ScfCandidate[] = [];
   let lastError: unknown = null;
   for (const start of starts) {
-    const scfOptions = { ...scfOptionsFor(runFile, reference, options.onProgress, start.initial), breakSymmetry: start.breakSymmetry };
+    const scfOptions = {
+      ...scfOptionsFor(runFile, reference, options.onProgress, start.initial),
+      ...(start.guess ? { guess: start.guess } : {}),
+      breakSymmetry: start.breakSymmetry,
+    };
     let scf: ScfResult;
     try {
       scf = runScf(problem, scfOptions);

@@ -55,8 +55,8 @@ export interface DeterminantWeight {
 }
 
 export interface ScfCandidate {
-  /** Where the SCF started: the neighbouring point's orbitals, the run file's guess, or a spin-symmetry-broken guess. */
-  source: 'neighbour' | 'guess' | 'broken-symmetry';
+  /** Where the SCF started: the neighbouring point's orbitals, the Hückel-like or core guess, or a spin-symmetry-broken guess. */
+  source: 'neighbour' | 'huckel' | 'core' | 'broken-symmetry';
   converged: boolean;
   energy: number | null;
   s2: number | null;

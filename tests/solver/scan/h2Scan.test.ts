@@ -97,7 +97,7 @@ describe('H2 in STO-3G along the bond', () => {
     // Two uncoupled spins in one determinant: ⟨S²⟩ = 1 (common practice, no source).
     expect(uhf.s2).toBeCloseTo(1, 6);
     expect(uhf.stability?.stable).toBe(true);
-    expect(uhf.candidates.map((c) => c.source)).toEqual(['neighbour', 'guess', 'broken-symmetry']);
+    expect(uhf.candidates.map((c) => c.source)).toEqual(['neighbour', 'huckel', 'core', 'broken-symmetry']);
     expect(uhf.orbitals.nBasis).toBe(2);
     expect(uhf.orbitals.alpha).toHaveLength(4);
     const rhf = far.solutions.RHF!;
