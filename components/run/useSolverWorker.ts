@@ -25,17 +25,28 @@ export interface RunFailure {
 interface SolverHandle {
   worker: Worker;
   api: Comlink.Remote<SolverWorkerApi>;
+  /** Rejects when the worker dies: a call it was answering would otherwise wait forever. */
+  crashed: Promise<never>;
 }
 
 function spawnSolverWorker(onCrash: (message: string) => void): SolverHandle {
   const worker = new Worker(new URL('../../workers/solver.worker.ts', import.meta.url), { type: 'module' });
+  let reject: (error: Error) => void = () => {};
+  const crashed = new Promise<never>((_, r) => {
+    reject = r;
+  });
+  crashed.catch(() => {}); // nobody may be waiting when it happens
+  const die = (message: string) => {
+    reject(new Error(message));
+    onCrash(message);
+  };
   worker.addEventListener('error', (event) => {
     // An uncaught error or a failed allocation inside the worker; the worker is unusable after it.
     event.preventDefault();
-    onCrash(event.message || 'the solver worker stopped without a message');
+    die(event.message || 'the solver worker stopped without a message');
   });
-  worker.addEventListener('messageerror', () => onCrash('the solver worker sent a message the page could not read'));
-  return { worker, api: Comlink.wrap<SolverWorkerApi>(worker) };
+  worker.addEventListener('messageerror', () => die('the solver worker sent a message the page could not read'));
+  return { worker, api: Comlink.wrap<SolverWorkerApi>(worker), crashed };
 }
 
 function crashText(detail: string): string {
@@ -47,6 +58,8 @@ export function useSolverWorker() {
   const estimateHandle = useRef<SolverHandle | null>(null);
   /** Bumped by every run, cancel and crash: an answer from an older run is ignored. */
   const runToken = useRef(0);
+  /** Workers are started only while the page is mounted (lazily again after a crash). */
+  const mounted = useRef(false);
   const [ready, setReady] = useState(false);
   const [status, setStatus] = useState<RunStatus>('idle');
   const [progress, setProgress] = useState<ProgressLog>(EMPTY_PROGRESS);
@@ -61,7 +74,9 @@ export function useSolverWorker() {
       runToken.current++;
       setStatus((s) => (s === 'running' ? 'failed' : s));
       setFailure({ code: 'crash', message: crashText(message) });
-      runHandle.current = spawnRunWorker();
+      // The next run starts a fresh worker. Not at once: a worker that cannot even start
+      // (a script that fails to load) would otherwise be respawned in an endless loop.
+      runHandle.current = null;
     });
     return handle;
   }, []);
@@ -70,7 +85,7 @@ export function useSolverWorker() {
     const handle = spawnSolverWorker(() => {
       if (estimateHandle.current !== handle) return;
       handle.worker.terminate();
-      estimateHandle.current = spawnEstimateWorker();
+      estimateHandle.current = null; // respawned by the next estimate, as for runs
     });
     return handle;
   }, []);
@@ -78,8 +93,10 @@ export function useSolverWorker() {
   useEffect(() => {
     runHandle.current = spawnRunWorker();
     estimateHandle.current = spawnEstimateWorker();
+    mounted.current = true;
     setReady(true);
     return () => {
+      mounted.current = false;
       runToken.current++;
       runHandle.current?.worker.terminate();
       estimateHandle.current?.worker.terminate();
@@ -90,16 +107,20 @@ export function useSolverWorker() {
   }, [spawnRunWorker, spawnEstimateWorker]);
 
   const estimate = useCallback(async (runFile: unknown): Promise<WorkerOutcome<RunEstimate>> => {
+    if (!estimateHandle.current && mounted.current) estimateHandle.current = spawnEstimateWorker();
     const handle = estimateHandle.current;
     if (!handle) return { ok: false, error: { code: 'internal', message: 'the solver is still starting' } };
     try {
-      return await handle.api.estimate(runFile);
+      return await Promise.race([handle.api.estimate(runFile), handle.crashed]);
     } catch (error) {
-      return { ok: false, error: { code: 'internal', message: error instanceof Error ? error.message : String(error) } };
+      const crashed = estimateHandle.current !== handle;
+      const message = error instanceof Error ? error.message : String(error);
+      return { ok: false, error: crashed ? { code: 'crash', message: crashText(message) } : { code: 'internal', message } };
     }
-  }, []);
+  }, [spawnEstimateWorker]);
 
   const run = useCallback(async (runFile: unknown): Promise<void> => {
+    if (!runHandle.current && mounted.current) runHandle.current = spawnRunWorker();
     const handle = runHandle.current;
     if (!handle) return;
     const token = ++runToken.current;
@@ -113,7 +134,8 @@ export function useSolverWorker() {
     };
     let outcome: WorkerOutcome<RunResult>;
     try {
-      outcome = await handle.api.run(runFile, Comlink.proxy(onProgress));
+      // After a crash the token has moved on and the crash handler has said what happened.
+      outcome = await Promise.race([handle.api.run(runFile, Comlink.proxy(onProgress)), handle.crashed]);
     } catch (error) {
       outcome = { ok: false, error: { code: 'internal', message: error instanceof Error ? error.message : String(error) } };
     }
@@ -126,7 +148,7 @@ export function useSolverWorker() {
       setFailure({ code: outcome.error.code, message: outcome.error.message, field: outcome.error.field, issues });
       setStatus('failed');
     }
-  }, []);
+  }, [spawnRunWorker]);
 
   /** Stop a run at once: a busy worker cannot be interrupted from inside, so it is replaced. */
   const cancel = useCallback(() => {

@@ -94,3 +94,47 @@ test('a crash in the solver worker becomes a readable error; the inputs survive 
   await expect(page.getByTestId('energy-root-1')).toBeVisible(); // the edited roots = 2 was used
   await expect(page.getByTestId('title')).toHaveValue('bond at 1.4 bohr, kept through a crash');
 });
+
+test('a solver worker that cannot start is reported, not restarted in a loop, and works once it can start', async ({ page }) => {
+  // While broken, every worker script the page asks for throws as it loads (as a stale or damaged deployment would).
+  let broken = true;
+  let requests = 0;
+  await page.route(/\/_next\/static\/.*worker.*\.js(\?.*)?$/, async (route) => {
+    requests++;
+    if (!broken) return route.continue();
+    await route.fulfill({ status: 200, contentType: 'text/javascript', body: "throw new Error('this copy of the solver cannot start');" });
+  });
+
+  await page.goto('/runs/new');
+  await expect(page.getByTestId('run-builder')).toBeVisible();
+  await page.getByTestId('source-starter').click();
+  await page.getByTestId('preset').selectOption('h2');
+  await page.getByTestId('ci-space').selectOption('FCI');
+  await page.getByTestId('title').fill('waiting for a working solver');
+
+  // The live estimate says the solver failed, in words, instead of counting forever.
+  await expect(page.getByTestId('estimate-error')).toContainText('The solver stopped unexpectedly', { timeout: 20_000 });
+  await expect(page.getByTestId('estimate-error')).toContainText('cannot start');
+
+  // Nothing keeps restarting the dead worker behind the user's back.
+  const settled = requests;
+  await page.waitForTimeout(2_000);
+  expect(requests).toBe(settled);
+
+  // Run starts a worker for itself, which fails the same way: a readable crash message, the form intact.
+  await page.getByTestId('run-button').click();
+  await expect(page.getByTestId('run-failure')).toHaveAttribute('data-code', 'crash', { timeout: 20_000 });
+  await expect(page.getByTestId('run-failure')).toContainText('cannot start');
+  await expect(page.getByTestId('title')).toHaveValue('waiting for a working solver');
+
+  // Once the script loads again, the next change is estimated and the next run works.
+  broken = false;
+  await page.getByTestId('roots').fill('1');
+  await page.getByTestId('title').fill('solver back');
+  await expect(page.getByTestId('estimate-determinants')).toHaveAttribute('data-value', '4', { timeout: 20_000 }); // C(2,1)² (analytic count)
+  await page.getByTestId('run-button').click();
+  const cell = page.getByTestId('energy-root-0');
+  await expect(cell).toBeVisible({ timeout: 60_000 });
+  // from memory of Szabo & Ostlund (1996) §4.3: H2 STO-3G full CI at R = 1.4 bohr ≈ −1.1373 hartree
+  expect(Number(await cell.getAttribute('data-value'))).toBeCloseTo(-1.1373, 3);
+});
