@@ -53,6 +53,8 @@ export async function runScanPoint(pointRunFile: RunFile, methods: ScanMethodPla
   }
 
   const methodResults: PointMethodResult[] = [];
+  // CISD and CISD+Q are one CI: methods that differ only in plusQ or label share the calculation.
+  const ciRuns = new Map<string, Awaited<ReturnType<typeof runCalculation>>>();
   for (const method of methods) {
     if (options.shouldCancel?.()) throw cancelled();
     const reference = orbitals[method.reference]!;
@@ -75,11 +77,16 @@ export async function runScanPoint(pointRunFile: RunFile, methods: ScanMethodPla
       ci: method.ci,
       output: { leadingDeterminants: FOLLOWING_DETERMINANTS, vectors: false, orbitals: false, densities: false },
     } as RunFile;
-    const result = await runCalculation(methodRun, {
-      precomputed: { prepared, reference },
-      onProgress: options.onProgress,
-      shouldCancel: options.shouldCancel,
-    });
+    const key = JSON.stringify([method.reference, method.ci]);
+    let result = ciRuns.get(key);
+    if (!result) {
+      result = await runCalculation(methodRun, {
+        precomputed: { prepared, reference },
+        onProgress: options.onProgress,
+        shouldCancel: options.shouldCancel,
+      });
+      ciRuns.set(key, result);
+    }
     const roots = result.ci!.roots;
     const energies = [...result.energies.roots];
     const methodWarnings = [...result.warnings];
