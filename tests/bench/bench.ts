@@ -70,6 +70,7 @@ async function main() {
   clearInterval(timer);
   if (quick) process.argv.push('--quick');
   await import('./ci-bench');
+  await (await import('./longTasks')).benchLongTasks();
   await (await import('./scan-bench')).runScanBench();
 }
 
