@@ -10,7 +10,7 @@ import { SolverError } from '../solver/errors';
 import { parseRunFile } from '../solver/runFile/parse';
 import { toJsonSafe } from '../solver/runFile/jsonSafety';
 import { runCalculation, estimateRun } from '../solver/run';
-import { planScan, runScan, scanToJson } from '../solver/scan';
+import { planScan, runScan, scanToJson, runLadder } from '../solver/scan';
 import type { RunFile } from '../solver/runFile/schema';
 import type { ProgressEvent } from '../solver/types';
 
@@ -94,6 +94,14 @@ async function main(argv: string[]): Promise<number> {
   try {
     const runFile = parseRunFile(json);
     if (runFile.scan) return await solveScan(runFile, flags);
+    if (runFile.ladder) {
+      const quiet = flags.includes('--quiet');
+      const ladder = await runLadder(runFile, {
+        onBasis: quiet ? undefined : (index, _result, plan) => process.stderr.write(`basis ${index + 1}/${plan.bases.length}: ${plan.bases[index]}\n`),
+      });
+      process.stdout.write(`${JSON.stringify(ladder)}\n`);
+      return 0;
+    }
     if (flags.includes('--estimate')) {
       process.stdout.write(`${JSON.stringify(toJsonSafe(estimateRun(runFile)))}\n`);
       return 0;

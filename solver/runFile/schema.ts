@@ -355,15 +355,33 @@ export const runFileSchema = z
     output: outputSettingsSchema.optional(),
     /** A series of runs along a coordinate (DEVELOPERS.md, "Scans"). */
     scan: scanSchema.optional(),
-    /** The methods run at each scan point; without it a scan runs the run's own reference and ci. */
+    /** The same system across bases: each method in each basis, as shares of the full-CI correlation energy. */
+    ladder: z
+      .object({ bases: z.array(basisSpecSchema).min(1, 'list at least one basis').max(12, 'at most 12 bases') })
+      .strict()
+      .optional(),
+    /** The methods run at each scan point or ladder basis; without it the run's own reference and ci. */
     methods: z.array(scanMethodSchema).min(1, 'list at least one method').max(20, 'at most 20 methods').optional(),
   })
   .strict()
   .superRefine((run, ctx) => {
-    if (run.methods && !run.scan) {
-      ctx.addIssue({ code: 'custom', path: ['methods'], message: 'a methods list goes with a scan' });
+    if (run.methods && !run.scan && !run.ladder) {
+      ctx.addIssue({ code: 'custom', path: ['methods'], message: 'a methods list goes with a scan or a ladder' });
     }
-    if (run.scan) checkScanAgainstRun(run, ctx);
+    if (run.scan && run.ladder) {
+      ctx.addIssue({ code: 'custom', path: ['ladder'], message: 'a run file holds a scan or a ladder, not both' });
+    } else if (run.scan) checkScanAgainstRun(run, ctx);
+    else if (run.ladder) {
+      if (run.system.type !== 'molecule') ctx.addIssue({ code: 'custom', path: ['ladder'], message: 'a ladder changes the basis: it needs a molecule' });
+      if (run.methods && run.ci !== undefined) {
+        ctx.addIssue({ code: 'custom', path: ['ci'], message: 'with a methods list, put the CI settings in methods' });
+      }
+      run.methods?.forEach((method, k) => {
+        if (method.reference === 'UHF' && method.space !== undefined) {
+          ctx.addIssue({ code: 'custom', path: ['methods', k, 'space'], message: 'UHF methods are SCF only: CI needs RHF or ROHF orbitals' });
+        }
+      });
+    }
     if (run.reference === 'UHF' && run.ci) {
       ctx.addIssue({
         code: 'custom',

@@ -36,8 +36,15 @@ function resolveMethod(method: ScanMethod, index: number, runFile: RunFile, twoS
   return { index, label: methodLabel({ reference, ci, plusQ, label }), reference, ci, plusQ, roots: ci ? ci.roots : 1 };
 }
 
-function withoutScan(runFile: RunFile): RunFile {
-  const { scan: _s, methods: _m, ci: _c, ...rest } = runFile;
+/** The run file's methods with defaults resolved; without a methods list, its own reference and ci. */
+export function planMethods(runFile: RunFile): ScanMethodPlan[] {
+  const twoS = runFile.system.type === 'molecule' ? runFile.system.multiplicity - 1 : 0;
+  const inputs: ScanMethod[] = runFile.methods ?? [{ ...(runFile.ci ?? {}), reference: runFile.reference, plusQ: false } as ScanMethod];
+  return inputs.map((m, k) => resolveMethod(m, k, runFile, twoS));
+}
+
+export function withoutScan(runFile: RunFile): RunFile {
+  const { scan: _s, methods: _m, ci: _c, ladder: _l, ...rest } = runFile;
   return rest as RunFile;
 }
 
@@ -84,15 +91,12 @@ export function planScan(runFile: RunFile): ScanPlan {
   const system = runFile.system;
   if (system.type !== 'molecule') throw badInput('a scan moves atoms: it needs a molecule', 'system.type');
   const warnings: string[] = [];
-  const twoS = system.multiplicity - 1;
 
   const points = scan.points ?? rangeValues(scan.from!, scan.to!, scan.step!);
   const pointRunFiles = points.map((value, k) => scanPointRunFile(runFile, value, scan.points ? `scan.points.${k}` : 'scan.from'));
   const base = withoutScan(runFile);
 
-  const methodInputs: ScanMethod[] =
-    runFile.methods ?? [{ ...(runFile.ci ?? {}), reference: runFile.reference, plusQ: false } as ScanMethod];
-  const methods = methodInputs.map((m, k) => resolveMethod(m, k, runFile, twoS));
+  const methods = planMethods(runFile);
 
   let referenceMethod: number | null = scan.referenceMethod ?? null;
   if (referenceMethod === null) {
