@@ -66,6 +66,8 @@ export const integralsSystemSchema = z
     coreEnergy: finite.default(0),
     oneBody: z.array(z.array(finite)),
     twoBody: z.array(z.tuple([count(199), count(199), count(199), count(199), finite])).max(5_000_000),
+    /** Overlap of non-orthogonal functions (n×n); present, the functions are orthogonalised before the run (solver/system/integralsFile.ts). */
+    overlap: z.array(z.array(finite)).optional(),
   })
   .strict()
   .superRefine((system, ctx) => {

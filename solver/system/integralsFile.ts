@@ -1,6 +1,8 @@
 import type { OrbitalHamiltonian } from '../types';
 import { eriIndex, eriLength } from '../integrals/eriIndex';
-import { badInput } from '../errors';
+import { badInput, SolverError } from '../errors';
+import { symmetricOrthogonaliser } from '../scf/orthogonaliser';
+import { moIntegrals } from '../transform/moIntegrals';
 
 /**
  * Ketbook's integral layout: a Hamiltonian over orthonormal orbitals that a user brings
@@ -14,12 +16,19 @@ import { badInput } from '../errors';
  * listed once (listing another member of the same class is accepted only if its value
  * agrees to 1e-10, so a file written with all 8 permutations still reads). Entries not
  * listed are zero.
+ *
+ * Non-orthogonal functions (e.g. the basis functions of a molecule) carry their overlap
+ * matrix in `"overlap": [[S00, S01, …], …]`; the functions are then orthogonalised
+ * symmetrically, X = S^{-1/2} (Löwdin, J. Chem. Phys. 18, 365 (1950)), and the run works
+ * with h' = Xᵀ h X and (pq|rs)' transformed by X, so every energy is that of the original
+ * functions. S must be n×n, symmetric and positive definite.
  */
 export interface IntegralsSystem {
   orbitals: number;
   coreEnergy: number;
   oneBody: number[][];
   twoBody: [number, number, number, number, number][];
+  overlap?: number[][];
 }
 
 const SYMMETRY_TOLERANCE = 1e-10;
@@ -69,7 +78,40 @@ export function orbitalHamiltonianFromIntegrals(system: IntegralsSystem): Orbita
     seen[at] = 1;
     eri[at] = value;
   });
-  return { nOrbitals: n, coreEnergy: system.coreEnergy, h, eri };
+  if (system.overlap === undefined) return { nOrbitals: n, coreEnergy: system.coreEnergy, h, eri };
+  const x = lowdinOrthogonaliser(system.overlap, n);
+  const all = Array.from({ length: n }, (_, p) => p);
+  const orthogonal = moIntegrals(h, eri, x, n, all);
+  return { nOrbitals: n, coreEnergy: system.coreEnergy, h: orthogonal.h, eri: orthogonal.eri };
+}
+
+/** S^{-1/2} of a checked overlap matrix; every failure names system.overlap. */
+function lowdinOrthogonaliser(overlap: number[][], n: number): Float64Array {
+  const field = 'system.overlap';
+  if (overlap.length !== n) throw badInput(`overlap has ${overlap.length} rows but orbitals is ${n}`, field);
+  const s = new Float64Array(n * n);
+  overlap.forEach((row, p) => {
+    if (row.length !== n) throw badInput(`overlap row ${p} has ${row.length} entries, expected ${n}`, `${field}[${p}]`);
+    row.forEach((value, q) => {
+      if (!Number.isFinite(value)) throw badInput(`overlap[${p}][${q}] is not a finite number`, `${field}[${p}][${q}]`);
+      s[p * n + q] = value;
+    });
+  });
+  for (let p = 0; p < n; p++) {
+    for (let q = 0; q < p; q++) {
+      if (Math.abs(s[p * n + q] - s[q * n + p]) > SYMMETRY_TOLERANCE) {
+        throw badInput(`overlap is not symmetric: S[${p}][${q}] = ${s[p * n + q]} but S[${q}][${p}] = ${s[q * n + p]}`, field);
+      }
+    }
+  }
+  try {
+    return symmetricOrthogonaliser(s, n);
+  } catch (error) {
+    if (error instanceof SolverError && error.code === 'bad-input') {
+      throw badInput(`overlap is not positive definite, so the functions are linearly dependent or not a real overlap (${error.message})`, field);
+    }
+    throw error;
+  }
 }
 
 /** The inverse: every non-zero unique integral, canonical order p ≥ q, r ≥ s, pq ≥ rs. */
