@@ -54,6 +54,9 @@ export function RunBuilder({ solver }: { solver: SolverWorkerHandle }) {
   }, [valuesKey, trigger]);
   const estimate = useLiveEstimate(valuesKey, solver.estimate, solver.ready, blockedBy);
   const overBudget = estimate.kind === 'ok' && !estimate.estimate.withinBudget;
+  // Bad input only the solver can see (atoms on top of each other, a window wider than the
+  // basis) comes back from the estimate with the run-file field at fault.
+  const estimateField = estimate.kind === 'error' && estimate.field ? normaliseFieldPath(estimate.field) : null;
   const running = solver.status === 'running';
 
   const loadRunFile = useCallback(
@@ -113,6 +116,10 @@ export function RunBuilder({ solver }: { solver: SolverWorkerHandle }) {
     });
   };
 
+  useEffect(() => {
+    if (estimate.kind === 'error' && estimateField) setError(estimateField as never, { type: 'solver', message: estimate.message });
+  }, [estimate, estimateField, setError]);
+
   // A bad-input answer from a run names the run-file field; put the message beside it.
   useEffect(() => {
     const failure = solver.failure;
@@ -129,6 +136,10 @@ export function RunBuilder({ solver }: { solver: SolverWorkerHandle }) {
       return;
     }
     if (overBudget) return;
+    if (estimateField) {
+      setSubmitMessage('Nothing was run: fix the fields marked below their inputs.');
+      return;
+    }
     setSubmitMessage(null);
     void solver.run(runFile);
   };
