@@ -117,7 +117,6 @@ async function measureRun(page: Page, baseUrl: string, preset: string) {
   await page.getByTestId('source-starter').click();
   await page.getByTestId('preset').selectOption(preset);
   await page.getByTestId('estimate').and(page.locator('[data-state="within"]')).waitFor({ timeout: 60_000 });
-  const determinants = Number(await page.getByTestId('estimate-determinants').getAttribute('data-value'));
   // Let the page go quiet so loading and typing are not counted as the run's.
   await page.waitForTimeout(1000);
   const startMs = await page.evaluate(() => performance.now());
@@ -132,6 +131,8 @@ async function measureRun(page: Page, baseUrl: string, preset: string) {
   await page.waitForTimeout(300);
   const tasks = (await page.evaluate(() => window.__ketbookLongTasks ?? [])).filter((t) => t.startMs + t.durationMs >= startMs && t.startMs <= endMs);
   const energy = Number(await page.getByTestId('energy-root-0').getAttribute('data-value'));
+  // The count the run itself reported (the estimate panel may still show the previous system's).
+  const determinants = Number((await page.getByTestId('progress-determinants').innerText()).replace(/[^0-9]/g, ''));
   return { determinants, wallMs: endMs - startMs, tasks, energy };
 }
 
