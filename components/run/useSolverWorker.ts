@@ -22,14 +22,15 @@ export interface RunFailure {
   issues?: { path: string; message: string }[];
 }
 
-interface SolverHandle {
+export interface SolverHandle {
   worker: Worker;
   api: Comlink.Remote<SolverWorkerApi>;
   /** Rejects when the worker dies: a call it was answering would otherwise wait forever. */
   crashed: Promise<never>;
 }
 
-function spawnSolverWorker(onCrash: (message: string) => void): SolverHandle {
+/** A new solver worker; the results view starts its own for the Hamiltonian map and downloads. */
+export function spawnSolverWorker(onCrash: (message: string) => void): SolverHandle {
   const worker = new Worker(new URL('../../workers/solver.worker.ts', import.meta.url), { type: 'module' });
   let reject: (error: Error) => void = () => {};
   const crashed = new Promise<never>((_, r) => {

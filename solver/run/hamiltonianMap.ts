@@ -193,17 +193,16 @@ export function hamiltonianMap(runFile: RunFile): { view: HamiltonianMapView; co
   return { view, context: { hamiltonian: run.hamiltonian, space, order, patterns } };
 }
 
-/** The Slater–Condon breakdown of the element at map position (row, column). */
-export function elementBreakdown(context: HamiltonianMapContext, row: number, column: number): ElementBreakdown {
-  const n = context.patterns.length;
-  for (const [name, v] of [['row', row], ['column', column]] as const) {
-    if (!Number.isInteger(v) || v < 0 || v >= n) throw badInput(`${name} ${v} is outside the map (0…${n - 1})`);
-  }
-  const detI = context.patterns[row];
-  const detJ = context.patterns[column];
-  const element = slaterCondonElement(context.hamiltonian, detI, detJ);
+function breakdownOf(
+  hamiltonian: OrbitalHamiltonian,
+  detI: { alpha: number; beta: number },
+  detJ: { alpha: number; beta: number },
+  row: number,
+  column: number,
+): ElementBreakdown {
+  const element = slaterCondonElement(hamiltonian, detI, detJ);
   const termSum = element.terms.reduce((s, t) => s + t.factor * t.integral, 0);
-  const m = context.space.nOrbitals;
+  const m = hamiltonian.nOrbitals;
   return {
     row,
     column,
@@ -217,6 +216,15 @@ export function elementBreakdown(context: HamiltonianMapContext, row: number, co
     termSum,
     value: element.value,
   };
+}
+
+/** The Slater–Condon breakdown of the element at map position (row, column). */
+export function elementBreakdown(context: HamiltonianMapContext, row: number, column: number): ElementBreakdown {
+  const n = context.patterns.length;
+  for (const [name, v] of [['row', row], ['column', column]] as const) {
+    if (!Number.isInteger(v) || v < 0 || v >= n) throw badInput(`${name} ${v} is outside the map (0…${n - 1})`);
+  }
+  return breakdownOf(context.hamiltonian, context.patterns[row], context.patterns[column], row, column);
 }
 
 function patternOfBitString(text: string, nOrbitals: number, what: string): number {
@@ -236,7 +244,7 @@ export function mapPositionOf(context: HamiltonianMapContext, alpha: string, bet
   return context.order.indexOf(index);
 }
 
-/** The breakdown of ⟨D_I|H|D_J⟩ for two determinants picked by their bit strings. */
+/** The breakdown of ⟨D_I|H|D_J⟩ for two determinants of the map picked by their bit strings. */
 export function breakdownOfDeterminants(
   context: HamiltonianMapContext,
   first: { alpha: string; beta: string },
@@ -249,4 +257,19 @@ export function breakdownOfDeterminants(
     throw badInput(`the determinant α ${missing.alpha} β ${missing.beta} is not in this run's CI space`);
   }
   return elementBreakdown(context, row, column);
+}
+
+/**
+ * The breakdown for two determinants picked from the determinants table, without drawing the
+ * map (so it works for spaces of any size): row and column are −1.
+ */
+export function pairBreakdown(
+  run: RunCiHamiltonian,
+  first: { alpha: string; beta: string },
+  second: { alpha: string; beta: string },
+): ElementBreakdown {
+  const m = run.hamiltonian.nOrbitals;
+  const detI = { alpha: patternOfBitString(first.alpha, m, 'the first α string'), beta: patternOfBitString(first.beta, m, 'the first β string') };
+  const detJ = { alpha: patternOfBitString(second.alpha, m, 'the second α string'), beta: patternOfBitString(second.beta, m, 'the second β string') };
+  return breakdownOf(run.hamiltonian, detI, detJ, -1, -1);
 }

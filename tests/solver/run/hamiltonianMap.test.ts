@@ -7,6 +7,8 @@ import {
   breakdownOfDeterminants,
   elementBreakdown,
   hamiltonianMap,
+  pairBreakdown,
+  runCiHamiltonian,
 } from '../../../solver/run/hamiltonianMap';
 
 // Geometries: LiH at 3.015 bohr and water at R(OH) = 1.809 bohr, ∠HOH = 104.52°
@@ -136,5 +138,22 @@ describe('Hamiltonian map refusals', () => {
     const { context } = hamiltonianMap(parseRunFile({ ...scfOnly, ci: { space: 'FCI' } }));
     expect(() => breakdownOfDeterminants(context, { alpha: '1', beta: '10' }, { alpha: '10', beta: '10' })).toThrow(/2 characters of 0 and 1/);
     expect(() => elementBreakdown(context, 0, 4)).toThrow(/outside the map/);
+  });
+});
+
+describe('a pair picked from the determinants table', () => {
+  it('gives the same breakdown as the map, without drawing it', async () => {
+    const runFile = parseRunFile(systems.lih);
+    const { view, context } = hamiltonianMap(runFile);
+    const run = runCiHamiltonian(runFile);
+    const result = await runCalculation(runFile);
+    const [a, b] = result.ci!.roots[0].leadingDeterminants;
+    const pair = pairBreakdown(run, a, b);
+    const fromMap = breakdownOfDeterminants(context, a, b);
+    // the same Slater–Condon element whichever way it is reached (common practice, no source)
+    expect(pair.value).toBe(fromMap.value);
+    expect(pair.value).toBe(view.matrix[fromMap.row * view.size + fromMap.column]);
+    expect(pair.alphaI).toBe(a.alpha);
+    expect(() => pairBreakdown(run, a, { alpha: a.alpha, beta: '111000' })).toThrow(/same numbers of alpha and beta/);
   });
 });
