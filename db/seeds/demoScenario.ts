@@ -72,3 +72,80 @@ export const DEMO_WORKSPACES: DemoWorkspace[] = [
     projects: [],
   },
 ];
+
+/**
+ * The group's saved runs. Only the inputs are written here; the seed computes every number
+ * with Ketbook's own solver, so the demo shows real results, never invented ones.
+ */
+export interface DemoRun {
+  workspace: string;
+  project: string | null;
+  title: string;
+  tags: string[];
+  savedByEmail: string;
+  runFile: Record<string, unknown>;
+}
+
+const h2At = (distanceBohr: number) => ({
+  type: 'molecule',
+  units: 'bohr',
+  atoms: [
+    ['H', 0, 0, 0],
+    ['H', 0, 0, distanceBohr],
+  ],
+  basis: 'STO-3G',
+});
+
+export const DEMO_RUNS: DemoRun[] = [
+  {
+    workspace: 'larkspur',
+    project: 'H2 dissociation benchmarks',
+    title: 'H2 near equilibrium (1.4 bohr), full CI',
+    tags: ['equilibrium', 'reference'],
+    savedByEmail: 'tomasz@larkspur.example',
+    runFile: { format: 'ketbook-run/1', title: 'H2 at 1.4 bohr', system: h2At(1.4), reference: 'RHF', ci: { space: 'FCI', roots: 2 } },
+  },
+  {
+    workspace: 'larkspur',
+    project: 'H2 dissociation benchmarks',
+    title: 'H2 stretched to 4.0 bohr, full CI',
+    tags: ['stretched'],
+    savedByEmail: 'tomasz@larkspur.example',
+    runFile: { format: 'ketbook-run/1', title: 'H2 at 4.0 bohr', system: h2At(4.0), reference: 'RHF', ci: { space: 'FCI', roots: 2 } },
+  },
+  {
+    workspace: 'larkspur',
+    project: 'H2 dissociation benchmarks',
+    title: 'H2 stretched to 4.0 bohr, RHF only',
+    tags: ['stretched'],
+    savedByEmail: 'ines@larkspur.example',
+    runFile: { format: 'ketbook-run/1', title: 'H2 at 4.0 bohr, RHF', system: h2At(4.0), reference: 'RHF' },
+  },
+  {
+    workspace: 'larkspur',
+    project: null,
+    title: 'LiH, CISD with a frozen 1s core',
+    tags: ['truncated'],
+    savedByEmail: 'ines@larkspur.example',
+    runFile: {
+      format: 'ketbook-run/1',
+      title: 'LiH CISD fc1',
+      system: { type: 'molecule', units: 'angstrom', atoms: [['Li', 0, 0, 0], ['H', 0, 0, 1.6]], basis: 'STO-3G' },
+      reference: 'RHF',
+      ci: { space: 'CISD', frozenCore: 1 },
+    },
+  },
+  {
+    workspace: 'larkspur',
+    project: 'Hubbard ring studies',
+    title: 'Six-site ring at half filling, U/t = 4',
+    tags: ['half filling'],
+    savedByEmail: 'tomasz@larkspur.example',
+    runFile: {
+      format: 'ketbook-run/1',
+      title: 'Hubbard ring N=6 U/t=4',
+      system: { type: 'hubbard', sites: 6, periodic: true, t: 1, U: 4, electrons: 6 },
+      ci: { space: 'FCI', roots: 3 },
+    },
+  },
+];

@@ -1,15 +1,14 @@
 import 'server-only';
 import { parseRunFile } from '@/solver/runFile/parse';
 import { runFileHash } from '@/solver/runFile/canonical';
-import { describeRunFile } from '@/solver/runFile/describe';
 import { SolverError } from '@/solver/errors';
 import { ApiError } from '../errors';
-import type { NewRun } from '../queries/runs';
 import type { SaveRunInput } from './saveRunSchema';
 import { MAX_RUN_JSON_BYTES, MAX_VECTOR_COMPRESSED_BYTES, MAX_VECTOR_VALUES } from './savedRunLimits';
+import { savedRunColumns, type SavedRunColumns } from './savedRunRow';
 import { base64DecodedLength, base64ToBytes, decodeVectors } from './vectorCodec';
 
-type Prepared = Omit<NewRun, 'workspaceId' | 'userId' | 'clientAddress'>;
+type Prepared = SavedRunColumns;
 
 function fieldsOfRunFileError(error: SolverError): Record<string, string[]> {
   const fields: Record<string, string[]> = {};
@@ -34,9 +33,8 @@ export async function prepareSavedRun(input: SaveRunInput): Promise<Prepared> {
   const hash = await runFileHash(runFile);
   if (hash !== input.result.provenance.runFileHash) throw new ApiError('unprocessable:result-mismatch', { fields: { result: ['The result was not computed from this run file.'] } });
 
-  const runFileJson = JSON.stringify(input.runFile);
-  const resultJson = JSON.stringify(input.result);
-  if (new TextEncoder().encode(runFileJson).length + new TextEncoder().encode(resultJson).length > MAX_RUN_JSON_BYTES) {
+  const jsonBytes = new TextEncoder().encode(JSON.stringify(input.runFile)).length + new TextEncoder().encode(JSON.stringify(input.result)).length;
+  if (jsonBytes > MAX_RUN_JSON_BYTES) {
     throw new ApiError('payload_too_large:body', { message: `The run file and the result together exceed ${MAX_RUN_JSON_BYTES / 1024 / 1024} MiB.` });
   }
 
@@ -64,21 +62,13 @@ export async function prepareSavedRun(input: SaveRunInput): Promise<Prepared> {
     vector = { bytes: Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength), roots, length };
   }
 
-  const roots = input.result.energies.roots;
-  return {
-    projectId: input.projectId ?? null,
+  return savedRunColumns({
+    runFile,
+    runFileAsSent: input.runFile,
+    result: input.result,
     title: input.title,
     tags: input.tags ?? [],
-    labels: describeRunFile(runFile),
-    electrons: input.result.system.electrons,
-    determinantCount: input.result.determinantCount,
-    energyUnit: input.result.energyUnit,
-    referenceEnergy: input.result.energies.reference,
-    lowestEnergy: roots.length ? roots[0] : input.result.energies.reference,
-    runFileHash: hash,
-    solverVersion: input.result.provenance.solverVersion,
-    runFileJson,
-    resultJson,
+    projectId: input.projectId ?? null,
     vector,
-  };
+  });
 }

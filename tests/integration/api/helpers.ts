@@ -4,6 +4,7 @@
  * row counts and for putting rows into states (expired, revoked) a test needs.
  */
 import { randomBytes } from 'node:crypto';
+import http from 'node:http';
 import { Op } from 'sequelize';
 import { getModels } from '@/models';
 import { closeSequelize, getSequelize } from '@/db/connection';
@@ -73,6 +74,52 @@ export class ApiClient {
 
   get(path: string) {
     return this.json('GET', path);
+  }
+
+  /**
+   * A JSON POST on a connection of its own (node:http, no keep-alive pool). For bodies that take
+   * seconds to build: fetch would reuse a pooled socket that the server may close after its
+   * 5 s keep-alive timeout just as the upload starts, which ends in EPIPE instead of a reply.
+   */
+  postOnNewConnection(path: string, data: unknown): Promise<ApiReply> {
+    const body = JSON.stringify(data);
+    const url = new URL(`${BASE_URL}${path}`);
+    return new Promise((resolve, reject) => {
+      const req = http.request(
+        {
+          host: url.hostname,
+          port: url.port,
+          path: url.pathname + url.search,
+          method: 'POST',
+          agent: false,
+          headers: {
+            'content-type': 'application/json',
+            'content-length': Buffer.byteLength(body),
+            'x-forwarded-for': this.address,
+            ...(this.cookie ? { cookie: this.cookie } : {}),
+          },
+        },
+        (res) => {
+          const chunks: Buffer[] = [];
+          res.on('data', (c: Buffer) => chunks.push(c));
+          res.on('end', () => {
+            const text = Buffer.concat(chunks).toString('utf8');
+            let parsed: unknown = text;
+            try {
+              parsed = text ? JSON.parse(text) : null;
+            } catch {
+              /* not JSON */
+            }
+            const headers = new Headers();
+            for (const [k, v] of Object.entries(res.headers)) if (typeof v === 'string') headers.set(k, v);
+            resolve({ status: res.statusCode ?? 0, headers, body: parsed, setCookie: [] });
+          });
+        },
+      );
+      // The server may answer (e.g. 413) and close before the whole body is written; the reply still counts.
+      req.on('error', (error) => reject(error));
+      req.end(body);
+    });
   }
 
   /** A binary reply (downloads), with this client's cookie. */

@@ -186,7 +186,7 @@ describe('the size limit, end to end through the route handler and MariaDB', () 
     const { bytes, body } = bodyWithStoredVector(values);
     expect(bytes.byteLength).toBeLessThanOrEqual(MAX_VECTOR_COMPRESSED_BYTES);
     expect(bytes.byteLength).toBeGreaterThan(MAX_VECTOR_COMPRESSED_BYTES - 64);
-    const reply = await editor.client.post(runsPath(), body);
+    const reply = await editor.client.postOnNewConnection(runsPath(), body);
     expect(reply.status, JSON.stringify(reply.body).slice(0, 200)).toBe(201);
     const { Run } = getModels();
     const row = await Run.findOne({ where: { publicId: reply.body.run.id } });
@@ -198,7 +198,7 @@ describe('the size limit, end to end through the route handler and MariaDB', () 
     const before = await runCount();
     const { bytes, body } = bodyWithStoredVector(valuesAtLimit() + 8192);
     expect(bytes.byteLength).toBeGreaterThan(MAX_VECTOR_COMPRESSED_BYTES);
-    const reply = await editor.client.post(runsPath(), body);
+    const reply = await editor.client.postOnNewConnection(runsPath(), body);
     expect(reply.status).toBe(413);
     expect(reply.body.error.message).toMatch(/leading determinants/);
     expect(await runCount()).toBe(before);

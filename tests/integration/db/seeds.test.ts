@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { initModels, type Models } from '../../../models';
 import { verifyPassword } from '../../../db/passwords';
-import { DEMO_PEOPLE, DEMO_WORKSPACES } from '../../../db/seeds/demoScenario';
+import { DEMO_PEOPLE, DEMO_RUNS, DEMO_WORKSPACES } from '../../../db/seeds/demoScenario';
 import { createMigrator, createSeeder, SEEDER_META_TABLE } from '../../../db/umzug';
 import { createScratchDatabase, type ScratchDatabase } from './scratchDatabase';
 
@@ -18,12 +18,13 @@ afterAll(async () => {
 });
 
 async function counts() {
-  const { User, Workspace, Membership, Project } = models;
+  const { User, Workspace, Membership, Project, Run } = models;
   return {
     users: await User.count(),
     workspaces: await Workspace.count(),
     memberships: await Membership.count(),
     projects: await Project.count(),
+    runs: await Run.count(),
   };
 }
 
@@ -33,14 +34,15 @@ const expected = {
   workspaces: DEMO_WORKSPACES.length,
   memberships: DEMO_PEOPLE.reduce((n, p) => n + Object.keys(p.memberships).length, 0),
   projects: DEMO_WORKSPACES.reduce((n, w) => n + w.projects.length, 0),
+  runs: DEMO_RUNS.length,
 };
 
 describe('demo seed', () => {
   it('inserts the scenario: four people, two workspaces, their roles and projects', async () => {
     const applied = await createSeeder(scratch.sequelize).up();
-    expect(applied.map((s) => s.name)).toEqual(['2026.12.01T11.00.00.demo-scenario']);
+    expect(applied.map((s) => s.name)).toEqual(['2026.12.01T11.00.00.demo-scenario', '2026.12.02T09.00.00.demo-runs']);
     expect(await counts()).toEqual(expected);
-    expect(expected).toEqual({ users: 4, workspaces: 2, memberships: 4, projects: 2 });
+    expect(expected).toEqual({ users: 4, workspaces: 2, memberships: 4, projects: 2, runs: 5 });
 
     const { User, Workspace, Membership, Project } = models;
     const larkspur = await Workspace.findOne({ where: { slug: 'larkspur' } });
@@ -55,6 +57,14 @@ describe('demo seed', () => {
     });
     const projects = await Project.findAll({ where: { workspaceId: larkspur!.id }, order: [['name', 'ASC']] });
     expect(projects.map((p) => p.name)).toEqual(['H2 dissociation benchmarks', 'Hubbard ring studies']);
+
+    // The demo runs hold computed numbers, not typed-in ones. H2 STO-3G at 1.4 bohr:
+    // Szabo & Ostlund, Modern Quantum Chemistry, RHF −1.1167 Eh (§3.5.2) and FCI −1.1373 Eh (§4.2).
+    const h2 = await models.Run.findOne({ where: { title: 'H2 near equilibrium (1.4 bohr), full CI' } });
+    expect(Math.abs(h2!.referenceEnergy! - -1.1167)).toBeLessThan(1e-4);
+    expect(Math.abs(h2!.lowestEnergy! - -1.1373)).toBeLessThan(1e-4);
+    expect(h2!.ciVectorBytes).toBeGreaterThan(0);
+    expect(JSON.parse(h2!.result).provenance.runFileHash).toBe(h2!.runFileHash);
 
     const admin = await User.findOne({ where: { email: 'admin@ketbook.example' } });
     expect(admin?.siteRole).toBe('admin');
@@ -71,12 +81,12 @@ describe('demo seed', () => {
 
     await scratch.sequelize.query(`DELETE FROM ${SEEDER_META_TABLE}`);
     const reapplied = await createSeeder(scratch.sequelize).up();
-    expect(reapplied.length).toBe(1);
+    expect(reapplied.length).toBe(2);
     expect(await counts()).toEqual(before);
   });
 
   it('down removes the scenario again', async () => {
-    await createSeeder(scratch.sequelize).down();
-    expect(await counts()).toEqual({ users: 0, workspaces: 0, memberships: 0, projects: 0 });
+    await createSeeder(scratch.sequelize).down({ to: 0 });
+    expect(await counts()).toEqual({ users: 0, workspaces: 0, memberships: 0, projects: 0, runs: 0 });
   });
 });
