@@ -14,7 +14,8 @@
  *   'olsen'     δ = (θ − D)⁻¹ (r − ε x), ε = xᵀ(θ − D)⁻¹r / xᵀ(θ − D)⁻¹x, which removes the
  *               component along x that the plain correction would reproduce
  *               (Olsen, Jørgensen & Simons, Chem. Phys. Lett. 169, 463 (1990)).
- * Denominators are kept at least 1e-8 away from zero. Each correction is orthogonalised
+ * With a P space (options.pSpace) the diagonal D is replaced by the zeroth-order matrix A0
+ * that is exact on P, in both formulas. Denominators are kept at least 1e-8 away from zero. Each correction is orthogonalised
  * twice (classical Gram–Schmidt) against V and normalised; if it lies in the span the
  * residual is tried instead.
  *
@@ -48,8 +49,25 @@ export interface DavidsonOptions {
   project?: (v: Float64Array) => void;
   /** Dimension of that subspace (default N): the search ends when V spans it. */
   dimension?: number;
+  /** Exact block of A on a few chosen coordinates, used in the preconditioner (see PSpace). */
+  pSpace?: PSpace;
   onIteration?: (record: DavidsonIteration) => void;
   shouldCancel?: () => boolean;
+}
+
+/**
+ * A P space for the preconditioner: coordinates `indices` (m of them) on which A is known
+ * exactly, A_PP = U·diag(values)·Uᵀ with U = vectors (row-major m×m, column k = eigenvector k).
+ * The zeroth-order matrix is then A_PP on P and the diagonal elsewhere, with no P–Q coupling,
+ * and (θ − A0)⁻¹ is applied exactly (Olsen, Jørgensen & Simons, Chem. Phys. Lett. 169, 463
+ * (1990), who use such an explicit P space in their preconditioner). P must be invariant
+ * under the searched sector's projector (a set closed under the symmetry), so that the
+ * preconditioner keeps vectors in the sector.
+ */
+export interface PSpace {
+  indices: Int32Array;
+  values: Float64Array;
+  vectors: Float64Array;
 }
 
 export interface DavidsonResult {
@@ -114,6 +132,30 @@ export function davidson(
   const residual = Array.from({ length: k }, () => new Float64Array(N));
   const candidate = new Float64Array(N);
   const overlaps = new Float64Array(capacity);
+  const pSpace = options.pSpace && options.pSpace.indices.length > 0 ? options.pSpace : undefined;
+  const shifted = pSpace ? new Float64Array(N) : candidate;
+  const pIn = pSpace ? new Float64Array(pSpace.indices.length) : null;
+  const pOut = pSpace ? new Float64Array(pSpace.indices.length) : null;
+  /** out = (θ − A0)⁻¹ v: the diagonal outside P, U·diag(1/(θ − λ))·Uᵀ on P. */
+  const applyInverse = (th: number, v: Float64Array, out: Float64Array): void => {
+    for (let t = 0; t < N; t++) out[t] = v[t] / clampedDenominator(th - diagonal[t]);
+    if (!pSpace || !pIn || !pOut) return;
+    const { indices, values, vectors } = pSpace;
+    const p = indices.length;
+    for (let k = 0; k < p; k++) {
+      let s = 0;
+      for (let a = 0; a < p; a++) s += vectors[a * p + k] * v[indices[a]];
+      pIn[k] = s / clampedDenominator(th - values[k]);
+    }
+    pOut.fill(0);
+    for (let a = 0; a < p; a++) {
+      let s = 0;
+      const row = a * p;
+      for (let k = 0; k < p; k++) s += vectors[row + k] * pIn[k];
+      pOut[a] = s;
+    }
+    for (let a = 0; a < p; a++) out[indices[a]] = pOut[a];
+  };
   let m = 0; // vectors in V (with images in AV and rows in G)
   let pending = 0; // orthonormal vectors in V[m … m+pending) still without images
   let products = 0;
@@ -216,7 +258,17 @@ export function davidson(
       const th = theta[r];
       const res = residual[r];
       let epsilon = 0;
-      if (useOlsen) {
+      if (pSpace) {
+        // candidate = M r − ε M x with M = (θ − A0)⁻¹; ε = xᵀM r / xᵀM x (Olsen et al. 1990)
+        const x = ritzX[r];
+        applyInverse(th, res, candidate);
+        if (useOlsen) {
+          applyInverse(th, x, shifted);
+          const xx = dotAt(x, 0, shifted, 0, N);
+          epsilon = xx !== 0 ? dotAt(x, 0, candidate, 0, N) / xx : 0;
+          for (let t = 0; t < N; t++) candidate[t] -= epsilon * shifted[t];
+        }
+      } else if (useOlsen) {
         const x = ritzX[r];
         let xr = 0;
         let xx = 0;

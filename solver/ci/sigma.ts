@@ -141,63 +141,133 @@ function sigmaBetaBeta(plan: SigmaPlan, space: CiSpace, c: Float64Array, out: Fl
 }
 
 /**
- * Alpha–beta couplings. For one alpha orbital pair pq the alpha replacements J→I form the
- * rows of a dense gathered matrix; the beta operator M_pq = Σ_rs (pq|rs) E^β_rs acts on it
- * as a sparse matrix, with the contiguous inner loop running over the gathered rows.
+ * Alpha–beta couplings. For one orbital pair pq the alpha replacements J→I of a group
+ * (alphaBetaPlan.ts) form the rows of a dense gathered matrix, one column per beta string;
+ * the beta operator M_pq = Σ_rs (pq|rs) E^β_rs acts on it as a sparse matrix, with the
+ * contiguous inner loop running over the gathered rows. Each beta source class is gathered
+ * and each beta target class scattered once per pq, whatever number of beta blocks use it,
+ * and a pq none of whose integrals with the group's beta pairs is non-zero costs nothing.
  */
+/** Rows of one gathered pass: 64 rows × a few hundred beta strings stay in a core's cache. */
+const ROW_CHUNK = 64;
+
 function sigmaAlphaBeta(plan: SigmaPlan, space: CiSpace, c: Float64Array, out: Float64Array, lowerTriangle: boolean): void {
   const { n, eri4 } = plan;
   const n2 = n * n;
+  const { groups, activePairs } = plan.alphaBeta;
+  const betaSingles = plan.beta.replacements.singles;
   const betaClasses = space.beta.classes;
-  for (const A of plan.alpha.replacements.singles) {
-    for (const B of plan.beta.replacements.singles) {
-      const bI = blockIndexOf(space, A.targetClass, B.targetClass);
-      const bJ = blockIndexOf(space, A.sourceClass, B.sourceClass);
-      if (bI < 0 || bJ < 0) continue;
-      const offI = space.blocks[bI].offset;
-      const offJ = space.blocks[bJ].offset;
-      const nBI = betaClasses[B.targetClass].count;
-      const nBJ = betaClasses[B.sourceClass].count;
-      const bStart = B.start;
-      const bSource = B.source;
-      const bPair = B.pair;
-      const bSign = B.sign;
-      for (let pq = 0; pq < n2; pq++) {
-        const eStart = A.pairStart[pq];
-        const nE = A.pairStart[pq + 1] - eStart;
-        if (nE === 0) continue;
-        const base = pq * n2;
-        const gathered = scratchVector(plan, 'gathered', nE * nBJ);
-        const result = scratchVector(plan, 'result', nE * nBI);
-        for (let e = 0; e < nE; e++) {
-          const sa = A.pairSign[eStart + e];
-          const cRow = offJ + A.pairSource[eStart + e] * nBJ;
-          for (let jb = 0; jb < nBJ; jb++) gathered[jb * nE + e] = sa * c[cRow + jb];
+  const nBetaStrings = space.beta.count;
+  const flag = lowerTriangle ? 2 : 1;
+  for (const group of groups) {
+    const rows = Math.min(ROW_CHUNK, group.maxPerPair);
+    const gathered = scratchVector(plan, 'gathered', rows * nBetaStrings);
+    const result = scratchVector(plan, 'result', rows * nBetaStrings);
+    const { betaBlocks, betaSources, betaTargets, sourcePosition, targetPosition, pairStart, sign, sourceRow, targetRow, entries } = group;
+    const needSource = new Uint8Array(betaSources.length);
+    const touchTarget = new Uint8Array(betaTargets.length);
+    for (let pq = 0; pq < n2; pq++) {
+      const pqStart = pairStart[pq];
+      const pqEnd = pairStart[pq + 1];
+      if (pqEnd === pqStart) continue;
+      let active = false;
+      for (let b = 0; b < betaBlocks.length; b++) {
+        if ((activePairs[betaBlocks[b] * n2 + pq] & flag) !== 0) active = true;
+      }
+      if (!active) continue;
+      const base = pq * n2;
+      // chunks of rows keep the gathered and result matrices of one pass in cache
+      for (let e0 = pqStart; e0 < pqEnd; e0 += ROW_CHUNK) {
+        const nE = Math.min(ROW_CHUNK, pqEnd - e0);
+        for (let b = 0; b < betaBlocks.length; b++) {
+          const bi = betaBlocks[b];
+          if ((activePairs[bi * n2 + pq] & flag) === 0) continue;
+          const B = betaSingles[bi];
+          needSource[sourcePosition[B.sourceClass]] = 1;
+          touchTarget[targetPosition[B.targetClass]] = 1;
         }
-        result.fill(0, 0, nE * nBI);
-        for (let ib = 0; ib < nBI; ib++) {
-          const rCol = ib * nE;
-          const kEnd = bStart[ib + 1];
-          for (let k = bStart[ib]; k < kEnd; k++) {
-            const rs = bPair[k];
-            let w = bSign[k] * eri4[base + rs];
-            if (lowerTriangle && rs >= pq) {
-              // rows are sorted by pair: rs = pq counts half, larger rs come from the transpose
-              if (rs > pq) break;
-              w *= 0.5;
-            }
-            if (w === 0) continue;
-            const gCol = bSource[k] * nE;
-            axpy(result, rCol, w, gathered, gCol, nE);
+        // gathered[(beta string)·nE + e] = sign_e · c(source row of e, beta string)
+        for (let s = 0; s < betaSources.length; s++) {
+          if (!needSource[s]) continue;
+          needSource[s] = 0;
+          const cls = betaClasses[betaSources[s]];
+          const nB = cls.count;
+          const gBase = cls.start * nE;
+          const rowBase = s * entries + e0;
+          for (let e = 0; e < nE; e++) {
+            const sa = sign[e0 + e];
+            const cRow = sourceRow[rowBase + e];
+            for (let jb = 0, g = gBase + e; jb < nB; jb++, g += nE) gathered[g] = sa * c[cRow + jb];
           }
         }
-        for (let e = 0; e < nE; e++) {
-          const outRow = offI + A.pairTarget[eStart + e] * nBI;
-          for (let ib = 0; ib < nBI; ib++) out[outRow + ib] += result[ib * nE + e];
+        for (let t = 0; t < betaTargets.length; t++) {
+          if (!touchTarget[t]) continue;
+          const cls = betaClasses[betaTargets[t]];
+          result.fill(0, cls.start * nE, (cls.start + cls.count) * nE);
+        }
+        for (let b = 0; b < betaBlocks.length; b++) {
+          const bi = betaBlocks[b];
+          if ((activePairs[bi * n2 + pq] & flag) === 0) continue;
+          const B = betaSingles[bi];
+          const gOff = betaClasses[B.sourceClass].start * nE;
+          const rOff = betaClasses[B.targetClass].start * nE;
+          const nTarget = betaClasses[B.targetClass].count;
+          const bStart = B.start;
+          const bSource = B.source;
+          const bPair = B.pair;
+          const bSign = B.sign;
+          for (let ib = 0; ib < nTarget; ib++) {
+            const rCol = rOff + ib * nE;
+            const kEnd = bStart[ib + 1];
+            // terms are applied two at a time: one pass over the result column per pair
+            let heldW = 0;
+            let heldCol = -1;
+            for (let k = bStart[ib]; k < kEnd; k++) {
+              const rs = bPair[k];
+              let w = bSign[k] * eri4[base + rs];
+              if (lowerTriangle && rs >= pq) {
+                // rows are sorted by pair: rs = pq counts half, larger rs come from the transpose
+                if (rs > pq) break;
+                w *= 0.5;
+              }
+              if (w === 0) continue;
+              const gCol = gOff + bSource[k] * nE;
+              if (heldCol < 0) {
+                heldW = w;
+                heldCol = gCol;
+              } else {
+                axpy2(result, rCol, heldW, gathered, heldCol, w, gCol, nE);
+                heldCol = -1;
+              }
+            }
+            if (heldCol >= 0) axpy(result, rCol, heldW, gathered, heldCol, nE);
+          }
+        }
+        for (let t = 0; t < betaTargets.length; t++) {
+          if (!touchTarget[t]) continue;
+          touchTarget[t] = 0;
+          const cls = betaClasses[betaTargets[t]];
+          const nB = cls.count;
+          const rBase = cls.start * nE;
+          const rowBase = t * entries + e0;
+          for (let e = 0; e < nE; e++) {
+            const outRow = targetRow[rowBase + e];
+            for (let ib = 0, r = rBase + e; ib < nB; ib++, r += nE) out[outRow + ib] += result[r];
+          }
         }
       }
     }
   }
+}
+
+/** y[yo … yo+len) += a·x[xa … xa+len) + b·x[xb … xb+len). */
+function axpy2(y: Float64Array, yo: number, a: number, x: Float64Array, xa: number, b: number, xb: number, len: number): void {
+  let k = 0;
+  for (; k + 1 < len; k += 2) {
+    y[yo + k] += a * x[xa + k] + b * x[xb + k];
+    y[yo + k + 1] += a * x[xa + k + 1] + b * x[xb + k + 1];
+  }
+  if (k < len) y[yo + k] += a * x[xa + k] + b * x[xb + k];
 }
 
 /** y[yo … yo+len) += a·x[xo … xo+len), unrolled by four (measurably faster in V8). */

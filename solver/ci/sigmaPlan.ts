@@ -11,6 +11,7 @@
  */
 import { eriIndex } from '../integrals/eriIndex';
 import type { OrbitalHamiltonian } from '../types';
+import { alphaBetaPlan, AlphaBetaPlan } from './alphaBetaPlan';
 import { spinReplacements, SpinReplacements } from './replacements';
 import type { CiSpace } from './space';
 import type { SpinStrings } from './spinStrings';
@@ -28,6 +29,8 @@ export interface SigmaPlan {
   eri4: Float64Array;
   alpha: SpinSigmaData;
   beta: SpinSigmaData;
+  /** Grouped alpha replacements and active pairs of the alpha–beta part. */
+  alphaBeta: AlphaBetaPlan;
   /** Work arrays reused across sigma calls. */
   scratch: Map<string, Float64Array>;
 }
@@ -90,11 +93,14 @@ export function sigmaPlan(ham: OrbitalHamiltonian, space: CiSpace): SigmaPlan {
   let plan = space.cache.get(ham) as SigmaPlan | undefined;
   if (plan) return plan;
   const eri4 = unpackEri(ham);
+  const alpha = spinData(ham, eri4, space.alpha, spinReplacements(space, 'alpha'));
+  const beta = spinData(ham, eri4, space.beta, spinReplacements(space, 'beta'));
   plan = {
     n: ham.nOrbitals,
     eri4,
-    alpha: spinData(ham, eri4, space.alpha, spinReplacements(space, 'alpha')),
-    beta: spinData(ham, eri4, space.beta, spinReplacements(space, 'beta')),
+    alpha,
+    beta,
+    alphaBeta: alphaBetaPlan(space, alpha.replacements.singles, beta.replacements.singles, eri4, ham.nOrbitals),
     scratch: new Map(),
   };
   space.cache.set(ham, plan);

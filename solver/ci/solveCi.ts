@@ -13,8 +13,10 @@
  * reachable: multiplicity − 1 ≥ |nα − nβ|.
  *
  * With nα = nβ and a space symmetric under α ↔ β, Davidson works in transpose-parity
- * sectors (transposeSymmetry.ts) when a targetMultiplicity is given: only the sector of
- * parity (−1)^S is searched, and its sigma build costs about half of the plain one.
+ * sectors (transposeSymmetry.ts) when a targetMultiplicity or a spinParity is given: only
+ * the sector of parity (−1)^S is searched, and its sigma build costs about half of the
+ * plain one. spinParity alone (no target multiplicity) restricts the dense solve to that
+ * sector too, so both methods count the same states.
  *
  * Energies are totals (coreEnergy included). Each vector is normalised with its largest
  * |c| made positive. referenceWeight is c0² of the aufbau determinant (0 if not in the space).
@@ -22,7 +24,7 @@
 import { EigenvalueDecomposition, Matrix } from 'ml-matrix';
 import { badInput, SolverError } from '../errors';
 import type { OrbitalHamiltonian } from '../types';
-import { davidson, DavidsonCorrection, DavidsonIteration } from './davidson';
+import { davidson, DavidsonCorrection, DavidsonIteration, PSpace } from './davidson';
 import { DENSE_LIMIT_DETERMINANTS, defaultMaxSubspace } from './davidsonSettings';
 import { denseHamiltonian } from './denseHamiltonian';
 import { spinSquared } from './densities';
@@ -43,12 +45,25 @@ export interface SolveCiOptions {
   energyTolerance?: number;
   maxSubspace?: number;
   /**
-   * Use the Ms = 0 transpose symmetry when the space has it and targetMultiplicity is given
-   * (default true): Davidson then runs in the target spin's parity sector only.
+   * Use the Ms = 0 transpose symmetry when the space has it and the spin parity of the
+   * wanted states is known, from targetMultiplicity or spinParity (default true): Davidson
+   * then runs in that parity sector only.
    */
   transposeSymmetry?: boolean;
+  /**
+   * Without targetMultiplicity: look for roots among the states of this transpose parity
+   * only, +1 for S = 0, 2, … and −1 for S = 1, 3, … (nα = nβ; ignored when the space has no
+   * transpose symmetry). Dense and Davidson then both count only states of that parity.
+   */
+  spinParity?: TransposeParity;
   /** Davidson correction formula, default 'olsen' (see davidson.ts). */
   correction?: DavidsonCorrection;
+  /**
+   * Davidson preconditioner: 'p-space' (default) is exact on the P_SPACE_SIZE lowest-diagonal
+   * determinants (with their spin-flip partners) and diagonal elsewhere; 'diagonal' is the
+   * diagonal alone.
+   */
+  preconditioner?: 'p-space' | 'diagonal';
   budgetBytes?: number;
   onProgress?: (event: { phase: 'davidson'; iteration: number; energies: number[]; residualNorms: number[] }) => void;
   shouldCancel?: () => boolean;
@@ -66,6 +81,12 @@ export interface CiSolution {
 }
 
 const SPIN_TOLERANCE = 1e-6;
+
+/**
+ * Determinants of the Davidson P space (and of the start-vector diagonalisation). Measured on
+ * the 10-site Hubbard ring and 10-orbital molecule-like full CI (tests/bench/ci-bench.ts).
+ */
+const P_SPACE_SIZE = 240;
 
 /** Normalise and make the largest-magnitude coefficient positive. */
 export function normaliseWithSignRule(v: Float64Array): Float64Array {
@@ -143,10 +164,11 @@ function subspaceGuesses(
   diagonal: Float64Array,
   count: number,
   project?: (v: Float64Array) => void,
-): Float64Array[] {
+  pSpaceSize = P_SPACE_SIZE,
+): { guesses: Float64Array[]; pSpace?: PSpace } {
   const N = diagonal.length;
-  const size = Math.min(N, Math.max(64, 8 * count), 240);
-  if (size <= count) return initialGuesses(space, diagonal, count, project);
+  const size = Math.min(N, Math.max(Math.min(Math.max(64, 8 * count), 240), pSpaceSize));
+  if (size <= count) return { guesses: initialGuesses(space, diagonal, count, project) };
   const order = Array.from({ length: N }, (_, i) => i).sort((a, b) => diagonal[a] - diagonal[b] || a - b);
   const chosen: number[] = [];
   const inSet = new Set<number>();
@@ -194,12 +216,15 @@ function subspaceGuesses(
     }
     guesses.push(v);
   }
-  return guesses.length > 0 ? guesses : initialGuesses(space, diagonal, count, project);
+  const pSpace: PSpace = { indices: Int32Array.from(chosen), values: Float64Array.from(values), vectors: new Float64Array(m * m) };
+  for (let a = 0; a < m; a++) for (let k = 0; k < m; k++) pSpace.vectors[a * m + k] = V.get(a, k);
+  return { guesses: guesses.length > 0 ? guesses : initialGuesses(space, diagonal, count, project), pSpace };
 }
 
-function denseSolve(ham: OrbitalHamiltonian, space: CiSpace): { energies: number[]; vectors: Float64Array[] } {
+function denseSolve(ham: OrbitalHamiltonian, space: CiSpace, sector?: { perm: Int32Array; parity: TransposeParity }): { energies: number[]; vectors: Float64Array[] } {
   const N = space.determinantCount;
   const H = denseHamiltonian(ham, space);
+  if (sector) return denseSectorSolve(H, N, sector.perm, sector.parity);
   const rows = Array.from({ length: N }, (_, i) => Array.from(H.subarray(i * N, (i + 1) * N)));
   const eig = new EigenvalueDecomposition(new Matrix(rows), { assumeSymmetric: true });
   const values = eig.realEigenvalues;
@@ -208,6 +233,65 @@ function denseSolve(ham: OrbitalHamiltonian, space: CiSpace): { energies: number
   return {
     energies: order.map((i) => values[i]),
     vectors: order.map((col) => Float64Array.from({ length: N }, (_, r) => V.get(r, col))),
+  };
+}
+
+/**
+ * Dense eigenpairs inside one transpose-parity sector: H in the basis of the sector's
+ * symmetric combinations (|D⟩ + parity·|D̄⟩)/√2 and, for parity +1, the self-transposed
+ * determinants; the eigenvectors are expanded back over the determinants. Exactly degenerate
+ * states of the two parities can then not mix.
+ */
+function denseSectorSolve(H: Float64Array, N: number, perm: Int32Array, parity: TransposeParity): { energies: number[]; vectors: Float64Array[] } {
+  const first: number[] = [];
+  const second: number[] = [];
+  for (let i = 0; i < N; i++) {
+    const j = perm[i];
+    if (j < i) continue;
+    if (j === i) {
+      if (parity > 0) {
+        first.push(i);
+        second.push(-1);
+      }
+      continue;
+    }
+    first.push(i);
+    second.push(j);
+  }
+  const d = first.length;
+  const weight = (k: number): number => (second[k] < 0 ? 1 : Math.SQRT1_2);
+  const rows: number[][] = Array.from({ length: d }, () => new Array<number>(d).fill(0));
+  for (let a = 0; a < d; a++) {
+    for (let b = 0; b <= a; b++) {
+      const xa = first[a];
+      const ya = second[a];
+      const xb = first[b];
+      const yb = second[b];
+      let value = H[xa * N + xb];
+      if (yb >= 0) value += parity * H[xa * N + yb];
+      if (ya >= 0) value += parity * H[ya * N + xb];
+      if (ya >= 0 && yb >= 0) value += H[ya * N + yb];
+      value *= weight(a) * weight(b);
+      rows[a][b] = value;
+      rows[b][a] = value;
+    }
+  }
+  if (d === 0) return { energies: [], vectors: [] };
+  const eig = new EigenvalueDecomposition(new Matrix(rows), { assumeSymmetric: true });
+  const values = eig.realEigenvalues;
+  const order = values.map((_, i) => i).sort((a, b) => values[a] - values[b]);
+  const V = eig.eigenvectorMatrix;
+  return {
+    energies: order.map((i) => values[i]),
+    vectors: order.map((col) => {
+      const v = new Float64Array(N);
+      for (let a = 0; a < d; a++) {
+        const x = V.get(a, col) * weight(a);
+        v[first[a]] = x;
+        if (second[a] >= 0) v[second[a]] = parity * x;
+      }
+      return v;
+    }),
   };
 }
 
@@ -240,8 +324,10 @@ export function solveCi(ham: OrbitalHamiltonian, spec: CiSpaceSpec, options: Sol
 
   if (method === 'dense') {
     if (options.shouldCancel?.()) throw new SolverError('cancelled', 'the CI calculation was cancelled');
-    const all = denseSolve(ham, space);
-    for (let i = 0; i < N && energies.length < roots; i++) {
+    const perm = target === undefined && options.spinParity !== undefined && options.transposeSymmetry !== false ? transposePermutation(space) : null;
+    const all = denseSolve(ham, space, perm ? { perm, parity: options.spinParity! } : undefined);
+    if (all.energies.length < roots) throw badInput(`asked for ${roots} roots but the spin-parity sector has only ${all.energies.length} states`, 'roots');
+    for (let i = 0; i < all.energies.length && energies.length < roots; i++) {
       const v = normaliseWithSignRule(all.vectors[i]);
       const spin = spinSquared(space, v);
       if (!isTarget(spin)) continue;
@@ -252,10 +338,12 @@ export function solveCi(ham: OrbitalHamiltonian, spec: CiSpaceSpec, options: Sol
   } else {
     const diagonal = hamiltonianDiagonal(ham, space);
     const perm = options.transposeSymmetry === false ? null : transposePermutation(space);
-    // with the transpose symmetry: search the target spin's parity sector only
-    // Only with a target spin: without one, both sectors would be needed, which measured no
-    // cheaper than the whole-space search (the triplet sector converges more slowly).
-    const sectors: (TransposeParity | undefined)[] = perm && target !== undefined ? [parityOfMultiplicity(target)] : [undefined];
+    // With the transpose symmetry: search the wanted spin parity's sector only. Without a
+    // known parity both sectors would be needed, which measured no cheaper than the
+    // whole-space search (the triplet sector converges more slowly).
+    const knownParity = target !== undefined ? parityOfMultiplicity(target) : options.spinParity;
+    const sectors: (TransposeParity | undefined)[] = [perm ? knownParity : undefined];
+    const usePSpace = (options.preconditioner ?? 'p-space') === 'p-space';
     const found: { energy: number; vector: Float64Array; s2: number }[] = [];
     for (const parity of sectors) {
       const dimension = perm && parity !== undefined ? sectorDimension(perm, parity) : N;
@@ -269,7 +357,8 @@ export function solveCi(ham: OrbitalHamiltonian, spec: CiSpaceSpec, options: Sol
       let previousVectors: Float64Array[] = [];
       let sectorFound: typeof found = [];
       for (;;) {
-        const guesses = [...previousVectors, ...subspaceGuesses(ham, space, diagonal, tracked + 2, project)];
+        const start = subspaceGuesses(ham, space, diagonal, tracked + 2, project, usePSpace ? P_SPACE_SIZE : 0);
+        const guesses = [...previousVectors, ...start.guesses];
         const result = davidson((x, out) => sigma(ham, space, x, out, { transposeParity: parity }), diagonal, guesses, {
           roots: tracked,
           maxIterations: options.maxIterations ?? 200,
@@ -277,6 +366,7 @@ export function solveCi(ham: OrbitalHamiltonian, spec: CiSpaceSpec, options: Sol
           energyTolerance: options.energyTolerance ?? 1e-12,
           maxSubspace: Math.min(dimension, options.maxSubspace ?? defaultMaxSubspace(tracked)),
           correction: options.correction,
+          pSpace: usePSpace ? start.pSpace : undefined,
           project,
           dimension,
           shouldCancel: options.shouldCancel,

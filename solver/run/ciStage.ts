@@ -87,6 +87,18 @@ function plusQApplies(ci: CiSettings, spec: CiSpaceSpec, twoS: number): boolean 
   return spec.maxExcitation < highestLevel;
 }
 
+/**
+ * The spin parity of the state a run asks for when it names no target multiplicity: the
+ * ground state (one root) of a singlet run with nα = nβ in the CI is sought among the
+ * states of singlet parity (S = 0, 2, …), which halves the Davidson work through the Ms = 0
+ * transpose symmetry. With more roots every spin state still counts, as documented for
+ * `ci.roots`.
+ */
+function groundStateSpinParity(input: CiStageInput, spec: CiSpaceSpec): 1 | undefined {
+  if (input.ci.targetMultiplicity !== undefined || (input.ci.roots ?? 1) !== 1) return undefined;
+  return input.twoS === 0 && spec.nAlpha === spec.nBeta ? 1 : undefined;
+}
+
 export function runCiStage(input: CiStageInput): NonNullable<RunResult['ci']> & { plusQ: number | null; warnings: string[]; determinantCount: number; coreEnergy: number } {
   const { selection, spec, activeIrreps } = planCi(input);
   const estimate = estimateCiSpace(spec, { orbitalIrreps: activeIrreps, roots: input.ci.roots });
@@ -112,6 +124,7 @@ export function runCiStage(input: CiStageInput): NonNullable<RunResult['ci']> & 
   const solution = solveCi(ham, spec, {
     roots: input.ci.roots,
     targetMultiplicity: input.ci.targetMultiplicity,
+    spinParity: groundStateSpinParity(input, spec),
     method: input.ci.method,
     residualTolerance: convergence?.residualNorm ?? 1e-7,
     energyTolerance: convergence?.energyChange ?? 1e-12,
