@@ -12,15 +12,16 @@ import { Membership, initMembership } from './membership';
 import { PasswordReset, initPasswordReset } from './passwordReset';
 import { Project, initProject } from './project';
 import { Run, RunTag, initRun, initRunTag } from './run';
+import { Scan, ScanPoint, initScan, initScanPoint } from './scan';
 import { SignInAttempt, initSignInAttempt } from './signInAttempt';
 import { User, initUser } from './user';
 import { Workspace, initWorkspace } from './workspace';
 
-export { AuditEntry, Invitation, MailMessage, Membership, PasswordReset, Project, Run, RunTag, SignInAttempt, User, Workspace };
+export { AuditEntry, Invitation, MailMessage, Membership, PasswordReset, Project, Run, RunTag, Scan, ScanPoint, SignInAttempt, User, Workspace };
 export type { SiteRole } from './user';
 export type { WorkspaceRole } from './membership';
 
-const models = { AuditEntry, Invitation, MailMessage, Membership, PasswordReset, Project, Run, RunTag, SignInAttempt, User, Workspace };
+const models = { AuditEntry, Invitation, MailMessage, Membership, PasswordReset, Project, Run, RunTag, Scan, ScanPoint, SignInAttempt, User, Workspace };
 export type Models = typeof models;
 
 let boundTo: Sequelize | null = null;
@@ -51,6 +52,12 @@ function associate(): void {
   Run.hasMany(RunTag, { foreignKey: 'runId', as: 'tags' });
   RunTag.belongsTo(Run, { foreignKey: 'runId', as: 'run' });
 
+  Workspace.hasMany(Scan, { foreignKey: 'workspaceId', as: 'scans' });
+  Scan.belongsTo(Workspace, { foreignKey: 'workspaceId', as: 'workspace' });
+  Scan.belongsTo(Project, { foreignKey: 'projectId', as: 'project' });
+  Scan.belongsTo(User, { foreignKey: 'createdBy', as: 'creator' });
+  Scan.hasMany(ScanPoint, { foreignKey: 'scanId', as: 'points' });
+
   AuditEntry.belongsTo(User, { foreignKey: 'actorId', as: 'actor' });
   AuditEntry.belongsTo(Workspace, { foreignKey: 'workspaceId', as: 'workspace' });
 }
@@ -68,6 +75,8 @@ export function initModels(sequelize: Sequelize): Models {
   initSignInAttempt(sequelize);
   initRun(sequelize);
   initRunTag(sequelize);
+  initScan(sequelize);
+  initScanPoint(sequelize);
   associate();
   boundTo = sequelize;
   return models;

@@ -19,6 +19,7 @@ export type ApiErrorCode =
   | 'not_found:mail'
   | 'not_found:route'
   | 'not_found:run'
+  | 'not_found:scan'
   | 'conflict:email'
   | 'conflict:slug'
   | 'conflict:project-name'
@@ -61,6 +62,7 @@ const defaultMessages: Record<ApiErrorCode, string> = {
   'not_found:mail': 'No such message in the outbox.',
   'not_found:route': 'No such API route.',
   'not_found:run': 'No such run in this workspace.',
+  'not_found:scan': 'No such scan in this workspace.',
   'conflict:email': 'An account with that e-mail already exists.',
   'conflict:slug': 'That workspace address is already taken.',
   'conflict:project-name': 'This workspace already has a project with that name.',

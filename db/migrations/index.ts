@@ -13,6 +13,7 @@ import * as createMailOutbox from './2026.12.01T10.06.00.create-mail-outbox';
 import * as createAuditLog from './2026.12.01T10.07.00.create-audit-log';
 import * as createSignInAttempts from './2026.12.01T10.08.00.create-sign-in-attempts';
 import * as createRuns from './2026.12.02T08.00.00.create-runs';
+import * as createScans from './2026.12.02T10.00.00.create-scans';
 
 export const migrations: Step<QueryInterface>[] = [
   { name: '2026.12.01T10.00.00.create-users', ...createUsers },
@@ -25,4 +26,5 @@ export const migrations: Step<QueryInterface>[] = [
   { name: '2026.12.01T10.07.00.create-audit-log', ...createAuditLog },
   { name: '2026.12.01T10.08.00.create-sign-in-attempts', ...createSignInAttempts },
   { name: '2026.12.02T08.00.00.create-runs', ...createRuns },
+  { name: '2026.12.02T10.00.00.create-scans', ...createScans },
 ];

@@ -21,6 +21,9 @@ export type AuditAction =
   | 'run.create'
   | 'run.edit'
   | 'run.delete'
+  | 'scan.create'
+  | 'scan.edit'
+  | 'scan.delete'
   | 'password.reset-request'
   | 'password.reset';
 
