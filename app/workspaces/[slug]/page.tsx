@@ -2,6 +2,7 @@ import type { Metadata } from 'next';
 import { notFound } from 'next/navigation';
 import { PageTitle, Section } from '@/components/layout/Page';
 import { RunsTable } from '@/components/runs/RunsTable';
+import { ScansTable } from '@/components/runs/ScansTable';
 import { InvitationList } from '@/components/workspace/InvitationList';
 import { InviteForm } from '@/components/workspace/InviteForm';
 import { MemberList } from '@/components/workspace/MemberList';
@@ -47,6 +48,10 @@ export default async function WorkspacePage({ params }: Props) {
 
       <Section title="Runs" testId="workspace-runs">
         <RunsTable slug={slug} />
+      </Section>
+
+      <Section title="Scans" testId="workspace-scans">
+        <ScansTable slug={slug} />
       </Section>
 
       <Section title="Projects" testId="workspace-projects">
