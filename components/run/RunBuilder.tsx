@@ -1,5 +1,5 @@
 'use client';
-import { useCallback, useEffect, useState } from 'react';
+import { memo, useCallback, useEffect, useState } from 'react';
 import { FormProvider, useForm, useWatch } from 'react-hook-form';
 import type { RunFile, RunFileInput } from '../../solver/runFile/schema';
 import type { SolverWorkerHandle } from './useSolverWorker';
@@ -24,7 +24,10 @@ function clone<T>(value: T): T {
  * (plus the electron/multiplicity parity), with a live size estimate from the worker.
  * What Run sends is exactly the parsed run file, which is also what the download holds.
  */
-export function RunBuilder({ solver }: { solver: SolverWorkerHandle }) {
+/** What the form needs from the solver hook; progress and results are left out so they never re-render the form. */
+export type RunBuilderSolver = Pick<SolverWorkerHandle, 'estimate' | 'ready' | 'status' | 'failure' | 'run' | 'cancel'>;
+
+export const RunBuilder = memo(function RunBuilder({ solver }: { solver: RunBuilderSolver }) {
   const form = useForm<RunFileInput, unknown, RunFile>({
     resolver: runBuilderResolver,
     mode: 'onChange',
@@ -221,4 +224,4 @@ export function RunBuilder({ solver }: { solver: SolverWorkerHandle }) {
       </form>
     </FormProvider>
   );
-}
+});

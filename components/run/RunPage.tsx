@@ -10,10 +10,13 @@ import { withoutVectors } from '../runs/savedRunPayload';
 /** The whole in-browser run: builder, progress, results and saving, around one solver worker. */
 export function RunPage() {
   const solver = useSolverWorker();
+  const { estimate, ready, status, failure, run, cancel } = solver;
+  // Progress events re-render this page many times a second; the form gets only what it uses.
+  const builderSolver = useMemo(() => ({ estimate, ready, status, failure, run, cancel }), [estimate, ready, status, failure, run, cancel]);
   const shown = useMemo(() => (solver.result ? withoutVectors(solver.result) : null), [solver.result]);
   return (
     <div className="grid gap-6">
-      <RunBuilder solver={solver} />
+      <RunBuilder solver={builderSolver} />
       <RunStatusPanel solver={solver} />
       {solver.status === 'done' && solver.result && shown ? (
         <>

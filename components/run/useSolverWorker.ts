@@ -1,5 +1,5 @@
 'use client';
-import { useCallback, useEffect, useRef, useState } from 'react';
+import { startTransition, useCallback, useEffect, useRef, useState } from 'react';
 import * as Comlink from 'comlink';
 import type { SolverWorkerApi, WorkerOutcome } from '../../workers/solver.worker';
 import type { RunEstimate, RunResult } from '../../solver/run/result';
@@ -131,7 +131,7 @@ export function useSolverWorker() {
     setFailure(null);
     setLastRunFile(runFile);
     const onProgress = (event: ProgressEvent) => {
-      if (token === runToken.current) setProgress((log) => applyProgress(log, event));
+      if (token === runToken.current) startTransition(() => setProgress((log) => applyProgress(log, event)));
     };
     let outcome: WorkerOutcome<RunResult>;
     try {
@@ -142,8 +142,13 @@ export function useSolverWorker() {
     }
     if (token !== runToken.current) return;
     if (outcome.ok) {
-      setResult(outcome.value);
-      setStatus('done');
+      const value = outcome.value;
+      // Putting a large result on screen is the page's heaviest render; as a transition React
+      // renders it in slices between frames instead of one long main-thread task.
+      startTransition(() => {
+        setResult(value);
+        setStatus('done');
+      });
     } else {
       const issues = Array.isArray(outcome.error.issues) ? (outcome.error.issues as RunFailure['issues']) : undefined;
       setFailure({ code: outcome.error.code, message: outcome.error.message, field: outcome.error.field, issues });
