@@ -23,6 +23,7 @@
  */
 import { badInput } from '../errors';
 import type { OrbitalHamiltonian } from '../types';
+import type { SingleReplacementBlock } from './replacements';
 import { sigmaPlan, SigmaPlan } from './sigmaPlan';
 import { blockIndexOf, CiSpace } from './space';
 import { addTransposed, transposePermutation, TransposeParity } from './transposeSymmetry';
@@ -148,8 +149,8 @@ function sigmaBetaBeta(plan: SigmaPlan, space: CiSpace, c: Float64Array, out: Fl
  * and each beta target class scattered once per pq, whatever number of beta blocks use it,
  * and a pq none of whose integrals with the group's beta pairs is non-zero costs nothing.
  */
-/** Rows of one gathered pass: 64 rows × a few hundred beta strings stay in a core's cache. */
-const ROW_CHUNK = 64;
+/** Rows of one gathered pass: about a hundred rows × a few hundred beta strings stay in a core's cache. */
+const ROW_CHUNK = 128;
 
 function sigmaAlphaBeta(plan: SigmaPlan, space: CiSpace, c: Float64Array, out: Float64Array, lowerTriangle: boolean): void {
   const { n, eri4 } = plan;
@@ -175,10 +176,10 @@ function sigmaAlphaBeta(plan: SigmaPlan, space: CiSpace, c: Float64Array, out: F
         if ((activePairs[betaBlocks[b] * n2 + pq] & flag) !== 0) active = true;
       }
       if (!active) continue;
-      const base = pq * n2;
-      // chunks of rows keep the gathered and result matrices of one pass in cache
-      for (let e0 = pqStart; e0 < pqEnd; e0 += ROW_CHUNK) {
-        const nE = Math.min(ROW_CHUNK, pqEnd - e0);
+      // equal chunks of at most ROW_CHUNK rows keep the gathered and result matrices of one pass in cache
+      const chunk = Math.ceil((pqEnd - pqStart) / Math.ceil((pqEnd - pqStart) / ROW_CHUNK));
+      for (let e0 = pqStart; e0 < pqEnd; e0 += chunk) {
+        const nE = Math.min(chunk, pqEnd - e0);
         for (let b = 0; b < betaBlocks.length; b++) {
           const bi = betaBlocks[b];
           if ((activePairs[bi * n2 + pq] & flag) === 0) continue;
@@ -211,37 +212,7 @@ function sigmaAlphaBeta(plan: SigmaPlan, space: CiSpace, c: Float64Array, out: F
           const B = betaSingles[bi];
           const gOff = betaClasses[B.sourceClass].start * nE;
           const rOff = betaClasses[B.targetClass].start * nE;
-          const nTarget = betaClasses[B.targetClass].count;
-          const bStart = B.start;
-          const bSource = B.source;
-          const bPair = B.pair;
-          const bSign = B.sign;
-          for (let ib = 0; ib < nTarget; ib++) {
-            const rCol = rOff + ib * nE;
-            const kEnd = bStart[ib + 1];
-            // terms are applied two at a time: one pass over the result column per pair
-            let heldW = 0;
-            let heldCol = -1;
-            for (let k = bStart[ib]; k < kEnd; k++) {
-              const rs = bPair[k];
-              let w = bSign[k] * eri4[base + rs];
-              if (lowerTriangle && rs >= pq) {
-                // rows are sorted by pair: rs = pq counts half, larger rs come from the transpose
-                if (rs > pq) break;
-                w *= 0.5;
-              }
-              if (w === 0) continue;
-              const gCol = gOff + bSource[k] * nE;
-              if (heldCol < 0) {
-                heldW = w;
-                heldCol = gCol;
-              } else {
-                axpy2(result, rCol, heldW, gathered, heldCol, w, gCol, nE);
-                heldCol = -1;
-              }
-            }
-            if (heldCol >= 0) axpy(result, rCol, heldW, gathered, heldCol, nE);
-          }
+          applyBetaBlock(B, betaClasses[B.targetClass].count, eri4, pq * n2, pq, lowerTriangle, gathered, gOff, result, rOff, nE);
         }
         for (let t = 0; t < betaTargets.length; t++) {
           if (!touchTarget[t]) continue;
@@ -257,6 +228,56 @@ function sigmaAlphaBeta(plan: SigmaPlan, space: CiSpace, c: Float64Array, out: F
         }
       }
     }
+  }
+}
+
+/**
+ * result[(target)·nE + e] += Σ_k w_k · gathered[(source_k)·nE + e] over one beta block's
+ * replacements, w = sign·(pq|rs) (lower triangle: rs < pq whole, rs = pq half). Terms are
+ * applied two at a time, one pass over the result column per pair. A function of its own so
+ * that the engine optimises this innermost loop nest as one small unit.
+ */
+function applyBetaBlock(
+  B: SingleReplacementBlock,
+  nTarget: number,
+  eri4: Float64Array,
+  base: number,
+  pq: number,
+  lowerTriangle: boolean,
+  gathered: Float64Array,
+  gOff: number,
+  result: Float64Array,
+  rOff: number,
+  nE: number,
+): void {
+  const bStart = B.start;
+  const bSource = B.source;
+  const bPair = B.pair;
+  const bSign = B.sign;
+  for (let ib = 0; ib < nTarget; ib++) {
+    const rCol = rOff + ib * nE;
+    const kEnd = bStart[ib + 1];
+    let heldW = 0;
+    let heldCol = -1;
+    for (let k = bStart[ib]; k < kEnd; k++) {
+      const rs = bPair[k];
+      let w = bSign[k] * eri4[base + rs];
+      if (lowerTriangle && rs >= pq) {
+        // rows are sorted by pair: rs = pq counts half, larger rs come from the transpose
+        if (rs > pq) break;
+        w *= 0.5;
+      }
+      if (w === 0) continue;
+      const gCol = gOff + bSource[k] * nE;
+      if (heldCol < 0) {
+        heldW = w;
+        heldCol = gCol;
+      } else {
+        axpy2(result, rCol, heldW, gathered, heldCol, w, gCol, nE);
+        heldCol = -1;
+      }
+    }
+    if (heldCol >= 0) axpy(result, rCol, heldW, gathered, heldCol, nE);
   }
 }
 

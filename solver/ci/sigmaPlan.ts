@@ -35,13 +35,23 @@ export interface SigmaPlan {
   scratch: Map<string, Float64Array>;
 }
 
+/**
+ * The full (pq|rs) table. With orbital irreps, an integral whose four irreps multiply to
+ * anything but the totally symmetric one is zero by symmetry and stored as an exact zero
+ * (transformed integrals carry round-off of order 1e-17 there), so that the sigma build can
+ * skip it.
+ */
 export function unpackEri(ham: OrbitalHamiltonian): Float64Array {
   const n = ham.nOrbitals;
+  const irreps = ham.orbitalIrreps;
   const eri4 = new Float64Array(n ** 4);
   for (let p = 0; p < n; p++)
     for (let q = 0; q < n; q++)
       for (let r = 0; r < n; r++)
-        for (let s = 0; s < n; s++) eri4[((p * n + q) * n + r) * n + s] = ham.eri[eriIndex(p, q, r, s)];
+        for (let s = 0; s < n; s++) {
+          if (irreps && (irreps[p] ^ irreps[q] ^ irreps[r] ^ irreps[s]) !== 0) continue;
+          eri4[((p * n + q) * n + r) * n + s] = ham.eri[eriIndex(p, q, r, s)];
+        }
   return eri4;
 }
 
