@@ -91,6 +91,32 @@ const h2RunFile = {
 };
 let h2Result: unknown;
 
+const h2ScanFile = {
+  ...h2RunFile,
+  ci: undefined,
+  scan: { coordinate: { type: 'distance', atoms: [0, 1] }, points: [1.0, 1.4], units: 'bohr' },
+  methods: [{ reference: 'RHF' }],
+};
+
+async function freshScanId(): Promise<string> {
+  const { Scan } = getModels();
+  const scan = await Scan.create({
+    publicId: randomBytes(12).toString('base64url'),
+    workspaceId: workspace.id,
+    projectId: null,
+    createdBy: users.owner.id,
+    title: `matrix scan ${uniqueSuffix()}`,
+    systemLabel: 'H2',
+    basisLabel: 'STO-3G',
+    methodsLabel: 'RHF',
+    pointCount: 2,
+    scanFileHash: '0'.repeat(64),
+    scanFile: JSON.stringify(h2ScanFile),
+    summary: null,
+  });
+  return scan.publicId;
+}
+
 async function freshRunId(): Promise<string> {
   const { Run } = getModels();
   const run = await Run.create({
@@ -208,6 +234,26 @@ const rows: Row[] = [
     name: 'delete run',
     method: 'DELETE',
     prepare: async () => ({ path: `${ws()}/runs/${await freshRunId()}` }),
+    expected: statuses(401, 404, 403, 200, 200, 403),
+  },
+  { name: 'list scans', method: 'GET', prepare: async () => ({ path: `${ws()}/scans` }), expected: statuses(401, 404, 200, 200, 200, 200) },
+  {
+    name: 'start scan',
+    method: 'POST',
+    prepare: async () => ({ path: `${ws()}/scans`, body: { title: `scan ${uniqueSuffix()}`, scanFile: h2ScanFile } }),
+    expected: statuses(401, 404, 403, 201, 201, 403),
+  },
+  { name: 'open scan', method: 'GET', prepare: async () => ({ path: `${ws()}/scans/${await freshScanId()}` }), expected: statuses(401, 404, 200, 200, 200, 200) },
+  {
+    name: 'finish scan',
+    method: 'PATCH',
+    prepare: async () => ({ path: `${ws()}/scans/${await freshScanId()}`, body: { status: 'cancelled' } }),
+    expected: statuses(401, 404, 403, 200, 200, 403),
+  },
+  {
+    name: 'delete scan',
+    method: 'DELETE',
+    prepare: async () => ({ path: `${ws()}/scans/${await freshScanId()}` }),
     expected: statuses(401, 404, 403, 200, 200, 403),
   },
   { name: 'outbox list', method: 'GET', prepare: async () => ({ path: '/api/admin/outbox' }), expected: statuses(401, 403, 403, 403, 403, 200) },

@@ -2,12 +2,12 @@ import { describe, expect, it } from 'vitest';
 import { accessFor, can, canOnSite, WORKSPACE_ACTIONS, type WorkspaceAccess, type WorkspaceAction } from '@/app/lib/permissions';
 
 // The expected table is the product rule written out by hand (common practice, no source):
-// owners do everything; editors manage projects; viewers and admin observers only read.
+// owners do everything; editors manage projects, runs and scans; viewers and admin observers only read.
 const expected: Record<WorkspaceAccess, WorkspaceAction[]> = {
   owner: [...WORKSPACE_ACTIONS],
-  editor: ['workspace.read', 'member.list', 'project.read', 'project.create', 'project.rename', 'project.delete'],
-  viewer: ['workspace.read', 'member.list', 'project.read'],
-  observer: ['workspace.read', 'member.list', 'project.read', 'invitation.list'],
+  editor: ['workspace.read', 'member.list', 'project.read', 'project.create', 'project.rename', 'project.delete', 'run.read', 'run.create', 'run.edit', 'run.delete'],
+  viewer: ['workspace.read', 'member.list', 'project.read', 'run.read'],
+  observer: ['workspace.read', 'member.list', 'project.read', 'invitation.list', 'run.read'],
 };
 
 describe('permission table', () => {
