@@ -139,6 +139,7 @@ export function moleculeProblem(prepared: PreparedMolecule, onProgress?: Progres
     nuclearRepulsionHartree: prepared.nuclearRepulsionHartree,
     nAlpha,
     nBeta,
+    functionAtom: basis.functionAtom,
   };
   return problem;
 }

@@ -114,7 +114,7 @@ export function runScf(problem: ScfProblem, options: ScfOptions): ScfResult {
     cAlpha = Float64Array.from(options.initialOrbitals.alpha);
     cBeta = reference === 'UHF' ? Float64Array.from(options.initialOrbitals.beta) : cAlpha;
   } else {
-    cAlpha = diagonaliseFock(guessFock(options.guess ?? 'huckel', problem.coreHamiltonian, overlap, n), x, n).coefficients;
+    cAlpha = diagonaliseFock(guessFock(options.guess ?? 'huckel', problem.coreHamiltonian, overlap, n, problem.functionAtom), x, n).coefficients;
     cBeta = cAlpha;
   }
   if (options.breakSymmetry && reference === 'UHF' && nAlpha >= 1 && nAlpha < n) {

@@ -13,6 +13,12 @@ export interface ScfProblem {
   nuclearRepulsionHartree: number;
   nAlpha: number;
   nBeta: number;
+  /**
+   * Optional: the atom of each basis function. The Hückel guess then keeps one-centre
+   * elements from the core Hamiltonian (see initialGuess.ts); without it every pair gets
+   * the two-centre formula.
+   */
+  functionAtom?: ArrayLike<number>;
 }
 
 export interface SpinPair<T> {

@@ -2,6 +2,9 @@ import { SolverError } from '../errors';
 import { pairIndex } from '../integrals/eriIndex';
 import { transformEri } from '../transform/transformEri';
 import { symmetricEigen } from './denseAlgebra';
+import { coulombExchange } from './coulombExchange';
+import { multiply, transpose } from './denseAlgebra';
+import { densityFromOrbitals, rotateOrbitalPair } from './orbitals';
 import { rotateOccupiedVirtual } from './orbitalRotation';
 import { runScf } from './runScf';
 import type { ScfOptions, ScfProblem, ScfResult } from './scfTypes';
@@ -9,14 +12,16 @@ import type { ScfOptions, ScfProblem, ScfResult } from './scfTypes';
 /** An orbital-Hessian eigenvalue below this (hartree) counts as an instability (common practice, no source). */
 export const INSTABILITY_THRESHOLD = -1e-6;
 
-export type InstabilityKind = 'rhf-to-rhf' | 'rhf-to-uhf' | 'uhf-to-uhf';
+export type InstabilityKind = 'rhf-to-rhf' | 'rhf-to-uhf' | 'uhf-to-uhf' | 'rohf-to-rohf';
 
 export interface StabilityInstability {
   kind: InstabilityKind;
   lowestEigenvalue: number;
   /**
    * Unit eigenvector of the lowest Hessian eigenvalue, amplitudes indexed i·nVirtual + (a − nOcc);
-   * for 'uhf-to-uhf' the α amplitudes come first, then the β ones.
+   * for 'uhf-to-uhf' the α amplitudes come first, then the β ones; for 'rohf-to-rohf' the
+   * entries follow the rotation pairs of rohfRotationPairs (doubly occupied→singly occupied,
+   * doubly occupied→virtual, singly occupied→virtual).
    */
   direction: Float64Array;
 }
@@ -25,7 +30,8 @@ export interface StabilityResult {
   rhfToRhf?: { lowestEigenvalue: number };
   rhfToUhf?: { lowestEigenvalue: number };
   uhfToUhf?: { lowestEigenvalue: number };
-  /** False only for ROHF references, which this analysis does not cover (then `stable` says nothing). */
+  rohfToRohf?: { lowestEigenvalue: number };
+  /** Whether the solution was analysed (every reference is; kept for callers that check). */
   analysed: boolean;
   stable: boolean;
   instability?: StabilityInstability;
@@ -125,14 +131,98 @@ function uhfHessian(problem: ScfProblem, result: ScfResult) {
   return { hessian, dim, alphaLength: offsets[1] };
 }
 
+/** The (occupied-like i, virtual-like a) MO pairs of the ROHF rotations: d→s, d→v, s→v. */
+export function rohfRotationPairs(n: number, nAlpha: number, nBeta: number): [number, number][] {
+  const pairs: [number, number][] = [];
+  for (let i = 0; i < nBeta; i++) for (let a = nBeta; a < n; a++) pairs.push([i, a]);
+  for (let i = nBeta; i < nAlpha; i++) for (let a = nAlpha; a < n; a++) pairs.push([i, a]);
+  return pairs;
+}
+
+/** Rotation angle of the finite differences, radians (central differences: error ∝ step²). */
+const ROHF_HESSIAN_STEP = 1e-4;
+
+/**
+ * ROHF energy gradient over the rotations `pairs` of the orbitals C (columns = MOs, the
+ * first nBeta doubly occupied, then nAlpha − nBeta singly occupied α):
+ *   ∂E/∂θ_ia = 2 Σ_σ (Cᵀ F^σ C)_ai (n^σ_i − n^σ_a)
+ * for the rotation i' = cos θ i + sin θ a, a' = −sin θ i + cos θ a (rotateOrbitalPair), with
+ * F^σ the UHF-form Fock matrices of the ROHF densities — the first derivative of the
+ * one-determinant energy (common practice, no source).
+ */
+function rohfGradient(problem: ScfProblem, c: Float64Array, pairs: [number, number][]): Float64Array {
+  const n = problem.nBasis;
+  const occAlpha = new Float64Array(n);
+  const occBeta = new Float64Array(n);
+  for (let i = 0; i < problem.nAlpha; i++) occAlpha[i] = 1;
+  for (let i = 0; i < problem.nBeta; i++) occBeta[i] = 1;
+  const dAlpha = densityFromOrbitals(c, occAlpha, n);
+  const dBeta = densityFromOrbitals(c, occBeta, n);
+  const { coulomb, exchange } = coulombExchange(problem.eri, n, [dAlpha, dBeta]);
+  const fAlpha = new Float64Array(n * n);
+  const fBeta = new Float64Array(n * n);
+  for (let k = 0; k < n * n; k++) {
+    const j = problem.coreHamiltonian[k] + coulomb[0][k] + coulomb[1][k];
+    fAlpha[k] = j - exchange[0][k];
+    fBeta[k] = j - exchange[1][k];
+  }
+  const ct = transpose(c, n);
+  const moAlpha = multiply(ct, multiply(fAlpha, c, n), n);
+  const moBeta = multiply(ct, multiply(fBeta, c, n), n);
+  return Float64Array.from(pairs, ([i, a]) => 2 * (moAlpha[a * n + i] * (occAlpha[i] - occAlpha[a]) + moBeta[a * n + i] * (occBeta[i] - occBeta[a])));
+}
+
+/**
+ * ROHF→ROHF stability: the Hessian of the ROHF energy over real rotations of the one set of
+ * orbitals (d→s, d→v, s→v), each column by central differences of the analytic gradient
+ * along one rotation, then symmetrised. At a stationary point this is the second derivative
+ * of the energy (the rotation parametrisation only matters through the gradient, which
+ * vanishes there), the criterion of Seeger & Pople, J. Chem. Phys. 66, 3045 (1977), for the
+ * restricted open-shell functional. For a closed shell it is 4 × the singlet A+B of
+ * rhfHessians (checked in the tests). Reported eigenvalues are divided by 4 so that they are
+ * on the scale of the RHF and UHF ones.
+ */
+function rohfHessian(problem: ScfProblem, result: ScfResult) {
+  const n = problem.nBasis;
+  const pairs = rohfRotationPairs(n, problem.nAlpha, problem.nBeta);
+  const dim = pairs.length;
+  const c = result.coefficients.alpha;
+  const hessian = new Float64Array(dim * dim);
+  const h = ROHF_HESSIAN_STEP;
+  pairs.forEach(([i, a], col) => {
+    const plus = rohfGradient(problem, rotateOrbitalPair(c, n, i, a, h), pairs);
+    const minus = rohfGradient(problem, rotateOrbitalPair(c, n, i, a, -h), pairs);
+    for (let row = 0; row < dim; row++) hessian[row * dim + col] = (plus[row] - minus[row]) / (2 * h);
+  });
+  for (let r = 0; r < dim; r++) {
+    for (let q = 0; q < r; q++) {
+      const v = 0.125 * (hessian[r * dim + q] + hessian[q * dim + r]);
+      hessian[r * dim + q] = v;
+      hessian[q * dim + r] = v;
+    }
+    hessian[r * dim + r] *= 0.25;
+  }
+  return { hessian, dim };
+}
+
 /**
  * Is the SCF solution a minimum with respect to real orbital rotations? RHF is checked
- * against RHF (singlet) and UHF (triplet) rotations, UHF against UHF rotations. ROHF is not
- * analysed (analysed: false). An RHF→RHF instability is reported ahead of an RHF→UHF one,
- * since it can be removed without leaving the reference.
+ * against RHF (singlet) and UHF (triplet) rotations, UHF against UHF rotations, ROHF against
+ * ROHF rotations (rohfHessian). An RHF→RHF instability is reported ahead of an RHF→UHF one,
+ * since it can be removed without leaving the reference. ROHF→UHF is not a stability
+ * question: the ROHF orbitals are not a stationary point of the UHF energy (its gradient
+ * there is the α–β Fock difference), so UHF lies lower for any open shell whose orbitals can
+ * spin-polarise.
  */
 export function stabilityAnalysis(problem: ScfProblem, result: ScfResult): StabilityResult {
-  if (result.reference === 'ROHF') return { analysed: false, stable: true };
+  if (result.reference === 'ROHF') {
+    const { hessian, dim } = rohfHessian(problem, result);
+    if (dim === 0) return { analysed: true, stable: true };
+    const r = lowest(hessian, dim);
+    const out: StabilityResult = { analysed: true, rohfToRohf: { lowestEigenvalue: r.value }, stable: r.value >= INSTABILITY_THRESHOLD };
+    if (!out.stable) out.instability = { kind: 'rohf-to-rohf', lowestEigenvalue: r.value, direction: r.vector };
+    return out;
+  }
   const n = problem.nBasis;
   if (result.reference === 'RHF') {
     const { singlet, triplet, dim } = rhfHessians(problem, result);
@@ -177,6 +267,14 @@ function rotatedStart(problem: ScfProblem, result: ScfResult, instability: Stabi
       alpha: rotateOccupiedVirtual(result.coefficients.alpha, n, problem.nAlpha, v, step),
       beta: rotateOccupiedVirtual(result.coefficients.beta, n, problem.nBeta, v, -step),
     };
+  }
+  if (instability.kind === 'rohf-to-rohf') {
+    // one orbital set: every rotation pair turned by step·(its amplitude), in sequence
+    let c = result.coefficients.alpha;
+    rohfRotationPairs(n, problem.nAlpha, problem.nBeta).forEach(([i, a], k) => {
+      if (v[k] !== 0) c = rotateOrbitalPair(c, n, i, a, step * v[k]);
+    });
+    return { reference: 'ROHF' as const, alpha: c, beta: c };
   }
   const alphaLength = problem.nAlpha * (n - problem.nAlpha);
   return {

@@ -94,8 +94,12 @@ describe('open shells on a three-site Hubbard chain, 2 α and 1 β electron (t =
     expect(stabilityAnalysis(p, followed).stable).toBe(true);
   });
 
-  it('does not analyse ROHF', () => {
-    expect(stabilityAnalysis(p, rohf).analysed).toBe(false);
+  it('analyses ROHF against ROHF rotations', () => {
+    // the ROHF→ROHF Hessian itself is checked in rohfStability.test.ts; here: it runs and reports
+    const a = stabilityAnalysis(p, rohf);
+    expect(a.analysed).toBe(true);
+    expect(Number.isFinite(a.rohfToRohf!.lowestEigenvalue)).toBe(true);
+    expect(a.stable).toBe(a.rohfToRohf!.lowestEigenvalue >= -1e-6);
   });
 });
 

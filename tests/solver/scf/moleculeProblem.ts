@@ -39,6 +39,7 @@ export function sto3gProblem(
       nuclearRepulsionHartree: nuclearRepulsionHartree(molecule),
       nAlpha,
       nBeta,
+      functionAtom: basis.functionAtom,
     },
   };
 }
