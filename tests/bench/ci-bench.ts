@@ -5,7 +5,8 @@
  * non-zero) and on the molecule-like Hamiltonian (diagonally dominant, canonical-HF-like
  * orbitals: the convergence of a molecule). Sigma builds are timed plain and with the
  * Ms = 0 transpose symmetry; solves without a target spin (whole space) and as singlets
- * (one transpose sector). Solve times are wall times including setup (space, plan).
+ * (one transpose sector), and for 10 orbitals once more with the diagonal preconditioner
+ * instead of the default P-space one. Solve times are wall times including setup (space, plan).
  *
  *   npx tsx tests/bench/ci-bench.ts            all cases
  *   npx tsx tests/bench/ci-bench.ts --quick    skips the 12-orbital Davidson solves
@@ -72,11 +73,12 @@ function benchSigma(label: string, ham: OrbitalHamiltonian, sites: number): void
   );
 }
 
-function benchSolve(label: string, ham: OrbitalHamiltonian, sites: number, targetMultiplicity?: number): void {
+function benchSolve(label: string, ham: OrbitalHamiltonian, sites: number, targetMultiplicity?: number, preconditioner?: 'p-space' | 'diagonal'): void {
   const spec = { nOrbitals: sites, nAlpha: sites / 2, nBeta: sites / 2, maxExcitation: null };
   const t = performance.now();
-  const sol = solveCi(ham, spec, { method: 'davidson', targetMultiplicity, onProgress: samplePeak });
+  const sol = solveCi(ham, spec, { method: 'davidson', targetMultiplicity, preconditioner, onProgress: samplePeak });
   label += targetMultiplicity === undefined ? ', any spin' : `, multiplicity ${targetMultiplicity}`;
+  if (preconditioner) label += `, ${preconditioner} preconditioner`;
   const wall = seconds(t);
   samplePeak();
   const last = sol.iterations[sol.iterations.length - 1];
@@ -98,6 +100,8 @@ for (const sites of [10, 12]) {
       benchSolve(label, ham, sites, 1);
       benchSolve(label, ham, sites);
     }
+    // the P-space preconditioner (default) against the diagonal alone, singlets
+    if (sites === 10) for (const [label, ham] of cases) benchSolve(label, ham, sites, 1, 'diagonal');
   }
 }
 console.log(`peak resident memory ${(peakRss / 2 ** 20).toFixed(0)} MiB`);
