@@ -1,9 +1,10 @@
 import 'server-only';
 import { randomBytes } from 'node:crypto';
-import { Op, type Order, type WhereOptions } from 'sequelize';
+import { Op, type Order, type Transaction, type WhereOptions } from 'sequelize';
 import type { Run } from '@/models';
 import { ApiError } from '../errors';
 import type { ListRunsQuery } from '../runs/saveRunSchema';
+import type { SavedRunColumns } from '../runs/savedRunRow';
 import { getModels, getSequelize } from '../server/db';
 import { recordAudit } from './audit';
 
@@ -105,34 +106,21 @@ export function newRunPublicId(): string {
   return randomBytes(12).toString('base64url');
 }
 
-export interface NewRun {
-  workspaceId: number;
-  projectId: number | null;
-  userId: number;
-  title: string;
-  tags: string[];
-  labels: { system: string; basis: string; method: string };
-  electrons: number;
-  determinantCount: number;
-  energyUnit: string;
-  referenceEnergy: number | null;
-  lowestEnergy: number | null;
-  runFileHash: string;
-  solverVersion: string;
-  runFileJson: string;
-  resultJson: string;
-  vector: { bytes: Buffer; roots: number; length: number } | null;
-  clientAddress: string | null;
+export type NewRun = SavedRunColumns & { workspaceId: number; userId: number; clientAddress: string | null };
+
+/** Inside a transaction: a project given with a run or scan must belong to the same workspace. */
+export async function requireProjectInWorkspace(projectId: number | null | undefined, workspaceId: number, transaction: Transaction) {
+  if (projectId === null || projectId === undefined) return;
+  const { Project } = getModels();
+  const project = await Project.findOne({ where: { id: projectId, workspaceId }, transaction });
+  if (!project) throw new ApiError('bad_request:validation', { fields: { projectId: ['No such project in this workspace.'] } });
 }
 
 /** The run, its tags and the audit entry in one transaction: a failure leaves no row behind. */
 export async function createRun(input: NewRun): Promise<RunSummary> {
-  const { Run, RunTag, Project } = getModels();
+  const { Run, RunTag } = getModels();
   const publicId = await getSequelize().transaction(async (transaction) => {
-    if (input.projectId !== null) {
-      const project = await Project.findOne({ where: { id: input.projectId, workspaceId: input.workspaceId }, transaction });
-      if (!project) throw new ApiError('bad_request:validation', { fields: { projectId: ['No such project in this workspace.'] } });
-    }
+    await requireProjectInWorkspace(input.projectId, input.workspaceId, transaction);
     const run = await Run.create(
       {
         publicId: newRunPublicId(),
@@ -268,14 +256,11 @@ export async function updateRun({
   projectId?: number | null;
   clientAddress: string | null;
 }): Promise<RunSummary> {
-  const { Run, RunTag, Project } = getModels();
+  const { Run, RunTag } = getModels();
   await getSequelize().transaction(async (transaction) => {
     const run = await Run.findOne({ where: { workspaceId, publicId }, attributes: ['id', 'title', 'projectId'], transaction });
     if (!run) throw new ApiError('not_found:run');
-    if (projectId) {
-      const project = await Project.findOne({ where: { id: projectId, workspaceId }, transaction });
-      if (!project) throw new ApiError('bad_request:validation', { fields: { projectId: ['No such project in this workspace.'] } });
-    }
+    await requireProjectInWorkspace(projectId, workspaceId, transaction);
     const patch: { title?: string; projectId?: number | null } = {};
     if (title !== undefined) patch.title = title;
     if (projectId !== undefined) patch.projectId = projectId;

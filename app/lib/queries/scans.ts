@@ -5,7 +5,7 @@ import { ApiError } from '../errors';
 import type { ListScansQuery } from '../runs/scanSchemas';
 import { getModels, getSequelize } from '../server/db';
 import { recordAudit } from './audit';
-import { newRunPublicId } from './runs';
+import { newRunPublicId, requireProjectInWorkspace } from './runs';
 
 export interface ScanSummary {
   id: string;
@@ -78,12 +78,9 @@ export async function createScan(input: {
   scanFileJson: string;
   clientAddress: string | null;
 }): Promise<ScanSummary> {
-  const { Scan, Project } = getModels();
+  const { Scan } = getModels();
   const publicId = await getSequelize().transaction(async (transaction) => {
-    if (input.projectId !== null) {
-      const project = await Project.findOne({ where: { id: input.projectId, workspaceId: input.workspaceId }, transaction });
-      if (!project) throw new ApiError('bad_request:validation', { fields: { projectId: ['No such project in this workspace.'] } });
-    }
+    await requireProjectInWorkspace(input.projectId, input.workspaceId, transaction);
     const scan = await Scan.create(
       {
         publicId: newRunPublicId(),
