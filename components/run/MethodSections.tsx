@@ -3,6 +3,7 @@ import { get, useFormContext, useWatch } from 'react-hook-form';
 import type { RunFileInput } from '../../solver/runFile/schema';
 import { FieldShell, SectionCard, controlClass } from './FieldShell';
 import { CI_SPACE_CHOICES, ciForSpace, type CiSpaceChoice } from './ciSettings';
+import { OrbitalPicker } from './OrbitalPicker';
 
 function errorText(errors: unknown, path: string): string | undefined {
   return (get(errors, path) as { message?: string } | undefined)?.message;
@@ -116,6 +117,7 @@ export function CiSpaceSection() {
           </FieldShell>
         </div>
       ) : null}
+      <OrbitalPicker />
     </SectionCard>
   );
 }
