@@ -1,10 +1,12 @@
 'use client';
+import { useState } from 'react';
 import { get, useFormContext, useWatch } from 'react-hook-form';
 import type { RunFileInput } from '../../solver/runFile/schema';
 import { FieldShell, SectionCard, controlClass } from './FieldShell';
 import { RUN_PRESETS } from './presets';
 import { systemParity } from './electronParity';
 import { flattenErrors } from './runBuilderResolver';
+import { basisFromJson } from './basisUpload';
 
 export type SystemSource = 'starter' | 'xyz' | 'hubbard' | 'integrals';
 
@@ -39,6 +41,71 @@ function firstErrorUnder(errors: unknown, path: string): string | undefined {
 }
 
 const number = { valueAsNumber: true } as const;
+const STO_CHOICES = ['STO-2G', 'STO-3G', 'STO-4G', 'STO-5G', 'STO-6G'];
+
+/** The basis: a built-in STO-nG set, or a set read from a JSON file in Ketbook's custom or even-tempered layout. */
+function BasisField() {
+  const { control, formState, setValue } = useFormContext<RunFileInput>();
+  const basis = useWatch({ control, name: 'system.basis' as 'system' }) as unknown;
+  const [fileError, setFileError] = useState<string | null>(null);
+  const uploaded = basis !== null && typeof basis === 'object';
+  const name = uploaded ? ((basis as { name?: string }).name ?? `${(basis as { type: string }).type} set`) : null;
+  const schemaError = firstErrorUnder(formState.errors, 'system.basis');
+  return (
+    <>
+      <FieldShell label="Basis" testId="basis" error={uploaded ? undefined : schemaError}>
+        {(c) => (
+          <select
+            {...c}
+            className={controlClass(Boolean(c['aria-invalid']))}
+            data-testid="basis"
+            value={uploaded ? 'uploaded' : String(basis ?? 'STO-3G')}
+            onChange={(e) => {
+              if (e.target.value === 'uploaded') return;
+              setFileError(null);
+              setValue('system.basis' as 'system', e.target.value as never, { shouldValidate: true, shouldDirty: true });
+            }}
+          >
+            {STO_CHOICES.map((b) => (
+              <option key={b} value={b}>
+                {b}
+              </option>
+            ))}
+            {uploaded ? <option value="uploaded">{name} (from file)</option> : null}
+          </select>
+        )}
+      </FieldShell>
+      <FieldShell
+        label="…or read a basis-set file (JSON)"
+        testId="basis-file"
+        error={fileError ?? (uploaded ? schemaError : undefined)}
+        hint="Ketbook's custom layout (contracted shells per element) or an even-tempered set; see the contributor guide."
+        className="sm:col-span-3"
+      >
+        {(c) => (
+          <input
+            {...c}
+            type="file"
+            accept=".json,application/json"
+            className="mt-1 block text-sm"
+            data-testid="basis-file"
+            onChange={async (e) => {
+              const file = e.target.files?.[0];
+              if (!file) return;
+              const read = basisFromJson(await file.text());
+              if ('error' in read) {
+                setFileError(read.error);
+                return;
+              }
+              setFileError(null);
+              setValue('system.basis' as 'system', read.basis as never, { shouldValidate: true, shouldDirty: true });
+            }}
+          />
+        )}
+      </FieldShell>
+    </>
+  );
+}
 
 export function SystemSection(props: SystemSectionProps) {
   const { register, control, formState } = useFormContext<RunFileInput>();
@@ -137,17 +204,7 @@ export function SystemSection(props: SystemSectionProps) {
                 <input {...c} type="number" step={1} min={1} className={controlClass(Boolean(c['aria-invalid']))} data-testid="multiplicity" {...register('system.multiplicity', number)} />
               )}
             </FieldShell>
-            <FieldShell label="Basis" testId="basis" error={errorText(errors, 'system.basis')}>
-              {(c) => (
-                <select {...c} className={controlClass(Boolean(c['aria-invalid']))} data-testid="basis" {...register('system.basis')}>
-                  {['STO-2G', 'STO-3G', 'STO-4G', 'STO-5G', 'STO-6G'].map((b) => (
-                    <option key={b} value={b}>
-                      {b}
-                    </option>
-                  ))}
-                </select>
-              )}
-            </FieldShell>
+            <BasisField />
           </div>
         </>
       ) : null}
@@ -181,8 +238,8 @@ export function SystemSection(props: SystemSectionProps) {
           <FieldShell
             label="Integral file (JSON, Ketbook's integral layout)"
             testId="integrals-file"
-            error={props.integralsError ?? errorText(errors, 'system.oneBody') ?? errorText(errors, 'system.twoBody')}
-            hint="An object with type “integrals”, orbitals, electrons, multiplicity, coreEnergy, oneBody (n×n) and twoBody ([p, q, r, s, (pq|rs)], 0-based, chemists' notation) — or a whole run file holding one."
+            error={props.integralsError ?? errorText(errors, 'system.oneBody') ?? errorText(errors, 'system.twoBody') ?? firstErrorUnder(errors, 'system.overlap')}
+            hint="An object with type “integrals”, orbitals, electrons, multiplicity, coreEnergy, oneBody (n×n) and twoBody ([p, q, r, s, (pq|rs)], 0-based, chemists' notation), optionally overlap (n×n, for basis functions that are not orthonormal) — or a whole run file holding one."
           >
             {(c) => (
               <input
